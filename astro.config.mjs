@@ -1,0 +1,19 @@
+// Static build. BASE sets the sub-path the site is served under (e.g. BASE=/rf/ npm run build).
+import { defineConfig } from 'astro/config';
+import svelte from '@astrojs/svelte';
+import mdx from '@astrojs/mdx';
+
+const base = process.env.BASE || '/';
+
+export default defineConfig({
+  srcDir: './site',
+  publicDir: './public',
+  outDir: './dist',
+  base,
+  trailingSlash: 'ignore',
+  output: 'static',
+  integrations: [svelte(), mdx()],
+  build: { format: 'directory', inlineStylesheets: 'never' },
+  devToolbar: { enabled: false },
+  prefetch: false,
+});
