@@ -1,0 +1,111 @@
+/**
+ * The contract between calc/ and the calculator frame.
+ *
+ * A calculator is a pure function from validated inputs (SI units inside: Hz, m, and degrees
+ * at the boundary for angles) to numeric outputs plus warnings, described by metadata: its
+ * parameters (name, unit, default, allowed range, description), its outputs (unit kind and
+ * precision) and its formulas. The frame builds fields, URL state and Markdown from this
+ * metadata; nothing else about a calculator is known to the frame.
+ */
+import type { CalcWarning } from './warnings';
+import type { FormulaDef } from './formula';
+
+/** Physical kinds that the frame knows how to parse and format. */
+export type QuantityKind =
+  | 'frequency' // Hz
+  | 'length' // m (a field may also accept wavelengths)
+  | 'angle' // degrees
+  | 'decibel' // dB (gain, loss, taper, sidelobe level…)
+  | 'power' // W (accepts dBm, dBW)
+  | 'powerDensity' // W/m²
+  | 'number' // a pure number (ratio, permittivity, exponent…)
+  | 'count'; // a whole number
+
+export interface NumberParamSpec {
+  kind: QuantityKind;
+  /** URL query key: short, lower-case, stable across versions. */
+  key: string;
+  /** Name of the input in calc/, with its unit (e.g. frequencyHz). */
+  name: string;
+  /** Visible label (the unit is shown beside it by the frame). */
+  label: string;
+  /** Default as text with unit, as a user would type it (e.g. '10 GHz'); '' when optional and empty. */
+  defaultText: string;
+  /** Inclusive limits in internal units (Hz, m, deg, dB, W…). */
+  min: number;
+  max: number;
+  /** Whether min itself is excluded (e.g. frequency > 0). */
+  minExclusive?: boolean;
+  /** May be left empty. */
+  optional?: boolean;
+  /** Length given in wavelengths ("0.5 λ") is allowed; names the input whose wavelength is meant. */
+  wavelengthFrom?: 'design' | 'highest';
+  description: string;
+}
+
+export interface ChoiceParamSpec {
+  kind: 'choice';
+  key: string;
+  name: string;
+  label: string;
+  options: { value: string; label: string }[];
+  defaultText: string;
+  description: string;
+}
+
+export type ParamSpec = NumberParamSpec | ChoiceParamSpec;
+
+/** Validated inputs: numbers in internal units (null for an empty optional field), choices as strings. */
+export type CalcInputs = Record<string, number | string | null>;
+
+export interface OutputSpec {
+  key: string;
+  label: string;
+  kind: QuantityKind | 'percent' | 'ratio';
+  /** Significant digits for display. */
+  digits: number;
+  /** Short note on how the value is found, shown as a tooltip/description. */
+  description?: string;
+}
+
+export interface CalcResult<Data = unknown> {
+  /** Output values by OutputSpec key; null when an output does not apply to these inputs. */
+  values: Record<string, number | null>;
+  warnings: CalcWarning[];
+  /** Series for plots and tables, calculator-specific. */
+  data: Data;
+}
+
+/** How a displayed formula ties to a calculator output (checked by tests). */
+export interface FormulaLink {
+  formula: FormulaDef;
+  /** Output key whose value the formula gives. */
+  output: string;
+  /** Arguments for formula.evaluate taken from the inputs and outputs. */
+  args: (inputs: CalcInputs, values: Record<string, number | null>) => Record<string, number> | null;
+}
+
+export interface CalculatorDef<Data = unknown> {
+  /** Route slug, e.g. 'wavelength-spacing'. */
+  id: string;
+  title: string;
+  /** One sentence: what question the calculator answers. */
+  purpose: string;
+  /** Current URL schema version (the `v` key). */
+  schemaVersion: number;
+  /**
+   * Upgraders for links made with older versions: migrations[n] turns a version-n query
+   * (key → text) into a version-(n+1) query. Version 1 links must keep opening.
+   */
+  migrations: Record<number, (query: Record<string, string>) => Record<string, string>>;
+  params: ParamSpec[];
+  outputs: OutputSpec[];
+  formulas: FormulaLink[];
+  /** Assumptions and validity limits, one sentence each. */
+  assumptions: string[];
+  /** Published references for the page. */
+  references: string[];
+  /** Path of the calc/ module, shown on the page. */
+  sourcePath: string;
+  compute: (inputs: CalcInputs) => CalcResult<Data>;
+}

@@ -1,0 +1,27 @@
+/**
+ * The team's conventions: defaults every calculator starts from, and the Conventions page's
+ * source. Change a value here and rebuild: every calculator and the Conventions page follow.
+ */
+import type { TeamConventions } from '../calc/teamConventions';
+
+export const teamConventions: TeamConventions = {
+  units: { frequency: 'GHz', length: 'cm' },
+  spacingMarginFraction: 0.05,
+  scanLossCosExponent: 1.3,
+  efficiencies: { reflectorAperture: 0.6, arrayRadiation: 0.8 },
+  maxScanDeg: 45,
+  designFrequencyHz: 10e9,
+  lattice: 'triangular',
+};
+
+/** One sentence per convention, for the Conventions page (keys follow TeamConventions). */
+export const conventionNotes: { key: string; value: (c: TeamConventions) => string; note: string }[] = [
+  { key: 'units', value: (c) => `${c.units.frequency}, ${c.units.length}`, note: 'Preferred display units for frequency and length. Fields accept any supported unit; results are shown in these where they read well.' },
+  { key: 'designFrequencyHz', value: (c) => `${c.designFrequencyHz / 1e9} GHz`, note: 'The frequency a calculator opens with when a link does not set one.' },
+  { key: 'maxScanDeg', value: (c) => `${c.maxScanDeg}°`, note: 'Default largest scan angle from broadside for array sizing and spacing.' },
+  { key: 'lattice', value: (c) => c.lattice, note: 'Default lattice for planar arrays. An equilateral triangular lattice allows about 15 % larger spacing than a square one for the same scan, so it needs about 13 % fewer elements.' },
+  { key: 'spacingMarginFraction', value: (c) => `${(c.spacingMarginFraction * 100).toFixed(0)} % below the limit`, note: 'We never design at the grating-lobe limit: the grating lobe sits on the horizon there and rises fast with any frequency or scan overshoot. Recommended spacings are this fraction below the limit at the highest frequency.' },
+  { key: 'scanLossCosExponent', value: (c) => `n = ${c.scanLossCosExponent}`, note: 'Scan-loss estimates model the embedded element power pattern as cosⁿθ. n = 1 is the projected-aperture loss alone; measured well-matched elements usually fall between 1.2 and 1.5.' },
+  { key: 'efficiencies.reflectorAperture', value: (c) => `${(c.efficiencies.reflectorAperture * 100).toFixed(0)} %`, note: 'Aperture efficiency assumed for front-fed reflectors in quick sizing (the reflector calculator computes its own budget).' },
+  { key: 'efficiencies.arrayRadiation', value: (c) => `${(c.efficiencies.arrayRadiation * 100).toFixed(0)} %`, note: 'Radiation efficiency assumed for phased arrays in quick sizing (feed network and element losses).' },
+];
