@@ -62,8 +62,10 @@ export interface OutputSpec {
   key: string;
   label: string;
   kind: QuantityKind | 'percent' | 'ratio';
-  /** Significant digits for display. */
+  /** Significant digits for display (decibels always show two decimals). */
   digits: number;
+  /** Display unit where the kind alone does not say it: 'dBi', 'dBd', 'λ₀', 'm²'… */
+  unit?: string;
   /** Short note on how the value is found, shown as a tooltip/description. */
   description?: string;
 }

@@ -1,0 +1,18 @@
+/** Every calculator and docs page, for the navigation and the home page. */
+export interface NavEntry {
+  path: string;
+  title: string;
+  summary: string;
+}
+
+export const calculators: NavEntry[] = [
+  {
+    path: 'calculators/wavelength-spacing/',
+    title: 'Wavelength & element spacing',
+    summary: 'Wavelengths over a band, the grating-lobe-free spacing for a lattice and scan range, and the element count of an aperture.',
+  },
+];
+
+export const docs: NavEntry[] = [
+  { path: 'conventions/', title: 'Conventions', summary: 'The team defaults every calculator starts from, and the angle convention.' },
+];
