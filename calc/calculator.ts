@@ -107,6 +107,11 @@ export interface CalculatorDef<Data = unknown> {
   assumptions: string[];
   /** Published references for the page. */
   references: string[];
+  /**
+   * Worked examples from the team's own scenarios (demo data): a title and a query string.
+   * Tests run each one (formula links, finiteness); guide pages may preset a calculator to one.
+   */
+  examples: { title: string; query: string }[];
   /** Path of the calc/ module, shown on the page. */
   sourcePath: string;
   compute: (inputs: CalcInputs) => CalcResult<Data>;

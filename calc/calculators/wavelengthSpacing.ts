@@ -254,6 +254,10 @@ export function createWavelengthSpacingCalculator(conventions: TeamConventions):
       'E. D. Sharp, "A triangular arrangement of planar-array elements that reduces the number needed", IRE Trans. Antennas Propag., AP-9, 1961.',
       'BIPM, The International System of Units (SI Brochure), 9th ed., 2019.',
     ],
+    examples: [
+      { title: 'Harbour-surveillance panel, 9–10 GHz, ±50° scan, 1.2 m × 0.4 m face', query: '?v=1&f=9GHz&fhi=10GHz&er=1&scan=50deg&lat=triangular&d=16mm&w=1.2m&h=0.4m&shape=rectangle' },
+      { title: 'Weather-balloon tracker, 1.68 GHz, ±30° scan, 0.6 λ spacing on a 1 m disc', query: '?v=1&f=1.68GHz&er=1&scan=30deg&lat=rectangular&d=0.6lambda&w=1m&shape=ellipse' },
+    ],
     sourcePath: 'calc/calculators/wavelengthSpacing.ts',
     compute: (inputs) => computeWavelengthSpacing(inputs, margin),
   };

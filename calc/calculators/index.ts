@@ -1,0 +1,11 @@
+/**
+ * Every calculator, by id: the formula reference, the embed routes and the tests iterate this.
+ * Add a calculator here when you add its page.
+ */
+import type { CalculatorDef } from '../calculator';
+import type { TeamConventions } from '../teamConventions';
+import { createWavelengthSpacingCalculator } from './wavelengthSpacing';
+
+export const calculatorFactories: Record<string, (conventions: TeamConventions) => CalculatorDef<unknown>> = {
+  'wavelength-spacing': createWavelengthSpacingCalculator as (c: TeamConventions) => CalculatorDef<unknown>,
+};
