@@ -1,0 +1,57 @@
+import { describe, expect, it } from 'vitest';
+import { defaultTexts, evaluate, safeCompute, validateField } from '../../components/frame/calculatorModel';
+import { createWavelengthSpacingCalculator } from '../../calc/calculators/wavelengthSpacing';
+import { teamConventions } from '../../site/conventions';
+import type { CalculatorDef } from '../../calc/calculator';
+
+const def = createWavelengthSpacingCalculator(teamConventions);
+
+describe('evaluate: last good result stays visible, marked stale', () => {
+  it('computes at defaults', () => {
+    const ev = evaluate(def, defaultTexts(def), null);
+    expect(ev.stale).toBe(false);
+    expect(ev.result!.values.lambda0High).toBeCloseTo(0.0299792458, 12);
+  });
+  it('a bad field keeps the previous result and marks it stale, with a message at the field', () => {
+    const good = evaluate(def, defaultTexts(def), null);
+    const bad = evaluate(def, { ...defaultTexts(def), f: '10 GHzz' }, good.result);
+    expect(bad.stale).toBe(true);
+    expect(bad.result).toBe(good.result);
+    expect(bad.fields.f.ok).toBe(false);
+    expect(!bad.fields.f.ok && bad.fields.f.message).toMatch(/Unknown unit/);
+  });
+  it('out of range gives a message with the range and unit', () => {
+    const status = validateField(def.params.find((p) => p.key === 'scan')!, '120 deg');
+    expect(status.ok).toBe(false);
+    expect(!status.ok && status.message).toMatch(/from 0 ° to 89 °/);
+  });
+  it('λ-relative spacing uses the highest frequency of the band', () => {
+    const ev = evaluate(def, { ...defaultTexts(def), f: '8 GHz', fhi: '12 GHz', d: '0.5 λ' }, null);
+    expect(ev.result!.values.chosenWavelengths).toBeCloseTo(0.5, 12);
+  });
+  it('a compute that throws or returns a non-finite value is caught, never shown', () => {
+    const throwing = { ...def, compute: () => { throw new Error('boom'); } } as CalculatorDef<unknown>;
+    expect(safeCompute(throwing, {})).toEqual({ ok: false, message: 'Cannot compute with these inputs: boom' });
+    const nan = { ...def, compute: () => ({ values: { x: Number.NaN }, warnings: [], data: null }) } as CalculatorDef<unknown>;
+    const r = safeCompute(nan, {});
+    expect(r.ok).toBe(false);
+  });
+});
+
+describe('wavelength & spacing results (values checked by hand)', () => {
+  it('10 GHz, 45° scan, triangular: limit (2/√3)/(1 + sin 45°) = 0.6765 λ (Mailloux §2.1); 5 % team margin', () => {
+    const ev = evaluate(def, { ...defaultTexts(def), f: '10 GHz', scan: '45 deg', lat: 'triangular' }, null);
+    const v = ev.result!.values;
+    expect(v.limitWavelengths).toBeCloseTo(2 / Math.sqrt(3) / (1 + Math.SQRT1_2), 12);
+    expect(v.recommendedWavelengths).toBeCloseTo(v.limitWavelengths! * (1 - teamConventions.spacingMarginFraction), 12);
+    expect(v.limitM).toBeCloseTo(v.limitWavelengths! * 0.0299792458, 14);
+  });
+  it('warns when a chosen spacing lets a grating lobe into the scan range', () => {
+    const ev = evaluate(def, { ...defaultTexts(def), scan: '45 deg', lat: 'rectangular', d: '0.7 λ' }, null);
+    expect(ev.result!.warnings.map((w) => w.code)).toContain('grating-lobe-in-scan-range');
+  });
+  it('element counts: triangular saves ≈13.4 % at each lattice’s own limit (Sharp 1961)', () => {
+    const ev = evaluate(def, { ...defaultTexts(def), w: '2 m', h: '2 m' }, null);
+    expect(ev.result!.values.savingPercent).toBeCloseTo(100 * (1 - Math.sqrt(3) / 2), 0);
+  });
+});

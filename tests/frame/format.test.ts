@@ -1,0 +1,46 @@
+import { describe, expect, it } from 'vitest';
+import fc from 'fast-check';
+import { canonicalToFieldText, formatCount, formatQuantity, formatSignificant } from '../../components/frame/format';
+
+describe('formatSignificant', () => {
+  it('rounds to significant digits and drops trailing zeros', () => {
+    expect(formatSignificant(0.0299792458, 4)).toBe('0.02998');
+    expect(formatSignificant(2.5, 4)).toBe('2.5');
+    expect(formatSignificant(123456, 3)).toBe('123000');
+    expect(formatSignificant(0, 3)).toBe('0');
+  });
+  it('never prints NaN or Infinity (property)', () => {
+    fc.assert(
+      fc.property(fc.double(), fc.integer({ min: 1, max: 10 }), (x, d) => {
+        expect(formatSignificant(x, d)).not.toMatch(/NaN|Infinity/);
+      }),
+    );
+  });
+});
+
+describe('formatQuantity picks a unit that reads well', () => {
+  it('frequency in GHz/MHz', () => {
+    expect(formatQuantity(10e9, 'frequency', 4)).toEqual({ text: '10', unit: 'GHz' });
+    expect(formatQuantity(144e6, 'frequency', 4)).toEqual({ text: '144', unit: 'MHz' });
+  });
+  it('length in m/cm/mm', () => {
+    expect(formatQuantity(1.5, 'length', 4)).toEqual({ text: '1.5', unit: 'm' });
+    expect(formatQuantity(0.0299792458, 'length', 5)).toEqual({ text: '2.9979', unit: 'cm' });
+    expect(formatQuantity(0.0012, 'length', 3)).toEqual({ text: '1.2', unit: 'mm' });
+  });
+  it('decibels with two decimals and a real minus sign', () => {
+    expect(formatQuantity(-13.2623, 'decibel', 4)).toEqual({ text: '−13.26', unit: 'dB' });
+    expect(formatQuantity(35.2, 'decibel', 4, 'dBi')).toEqual({ text: '35.20', unit: 'dBi' });
+  });
+  it('counts with thin-space grouping', () => {
+    expect(formatCount(65536)).toBe('65\u202f536');
+  });
+});
+
+describe('canonicalToFieldText', () => {
+  it('puts a space before the unit and shows λ', () => {
+    expect(canonicalToFieldText('10GHz')).toBe('10 GHz');
+    expect(canonicalToFieldText('0.5lambda')).toBe('0.5 λ');
+    expect(canonicalToFieldText('triangular')).toBe('triangular');
+  });
+});
