@@ -8,7 +8,7 @@ const base = process.env.BASE || '/';
 export default defineConfig({
   srcDir: './site',
   publicDir: './public',
-  outDir: './dist',
+  outDir: process.env.OUT_DIR || './dist',
   base,
   trailingSlash: 'ignore',
   output: 'static',

@@ -1,0 +1,2 @@
+/// <reference types="astro/client" />
+/// <reference types="svelte" />
