@@ -1,0 +1,5 @@
+/** All reference-case groups: the test suite runs them and the Verification record page lists them. */
+import type { ReferenceGroup } from './referenceCase';
+import { formulaExampleCases, wavelengthCases } from './wavelength.cases';
+
+export const referenceGroups: ReferenceGroup[] = [wavelengthCases, formulaExampleCases];
