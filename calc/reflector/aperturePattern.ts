@@ -23,9 +23,9 @@ export interface ApertureTable {
 
 /**
  * Tabulates an aperture amplitude E(t) (t = ρ/a, real, ≥ 0) on [innerFraction, 1] with
- * `panels` × 16-point Gauss–Legendre panels (default 6: |u| up to about 60 to 1e-9 relative).
+ * `panels` × 16-point Gauss–Legendre panels (default 4).
  */
-export function tabulateAperture(amplitude: (t: number) => number, innerFraction = 0, panels = 6): ApertureTable {
+export function tabulateAperture(amplitude: (t: number) => number, innerFraction = 0, panels = 4): ApertureTable {
   requireInRange('innerFraction', innerFraction, 0, 1 - 1e-9);
   const { nodes, weights } = compositeGaussLegendre(innerFraction, 1, 16, panels);
   const weightedField = new Float64Array(nodes.length);

@@ -64,10 +64,10 @@ export interface DisplacedFeedBeam {
 
 /**
  * Beam peak and scan loss of a laterally displaced feed, by a two-dimensional aperture
- * integration (radial 16×`radialPanels` Gauss–Legendre nodes, azimuthal 48 over half the circle,
+ * integration (radial 16×`radialPanels` Gauss–Legendre nodes, azimuthal 32 over half the circle,
  * using the symmetry of the scan plane). The search spans ±0.8 λ/D around Lo's prediction.
  */
-export function displacedFeedBeam(inputs: DisplacedFeedInputs, radialPanels = 4): DisplacedFeedBeam {
+export function displacedFeedBeam(inputs: DisplacedFeedInputs, radialPanels = 3): DisplacedFeedBeam {
   const { diameterWavelengths, focalRatio, powerExponent, blockedDiameterFraction, offsetWavelengths } = inputs;
   requirePositive('diameterWavelengths', diameterWavelengths);
   requireInRange('focalRatio', focalRatio, 0.25 + 1e-9, 100);
@@ -81,7 +81,7 @@ export function displacedFeedBeam(inputs: DisplacedFeedInputs, radialPanels = 4)
   const delta = offsetWavelengths;
   const halfTan = Math.tan(rimHalfAngleRad(focalRatio) / 2);
   const radial = compositeGaussLegendre(blockedDiameterFraction, 1, 16, radialPanels);
-  const azimuth = compositeGaussLegendre(0, Math.PI, 16, 3);
+  const azimuth = compositeGaussLegendre(0, Math.PI, 16, 2);
   const n = radial.nodes.length * azimuth.nodes.length;
   const weight = new Float64Array(n);
   const phaseError = new Float64Array(n);
@@ -123,7 +123,7 @@ export function displacedFeedBeam(inputs: DisplacedFeedInputs, radialPanels = 4)
   const span = 0.8 / diameterWavelengths;
   const lo = Math.max(-1, sPredicted - span);
   const hi = Math.min(1, sPredicted + span);
-  const sPeak = scanThenMinimize((s) => -power(s), lo, hi, 12, 1e-9);
+  const sPeak = scanThenMinimize((s) => -power(s), lo, hi, 12, 1e-4 / diameterWavelengths);
   const peak = power(sPeak);
   return { peakTiltRad: Math.asin(-sPeak), scanLossDb: Math.max(0, -10 * Math.log10(peak)) };
 }
