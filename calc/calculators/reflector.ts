@@ -185,12 +185,21 @@ export function computeReflector(inputs: CalcInputs): CalcResult<ReflectorData> 
   // Feed offset and cluster.
   const bdf = loBeamDeviationFactor(focalRatio);
   let offsetM: number;
+  let steeringAvailable = true;
   if (offsetSpec === 'length') {
     offsetM = requireNonNegative('feedOffsetM', (inputs.feedOffsetM as number | null) ?? 0, 'm');
   } else {
     const tiltBeamwidths = requireNonNegative('beamTiltBeamwidths', (inputs.beamTiltBeamwidths as number | null) ?? 0);
-    if (hpbwDeg === null && tiltBeamwidths > 0) throw new CalcInputError('beamTiltBeamwidths', 'the beamwidth is undefined for this small an aperture; give the feed offset as a length');
-    offsetM = tiltBeamwidths === 0 ? 0 : feedOffsetForTiltM(degToRad(tiltBeamwidths * (hpbwDeg as number)), focalM, bdf);
+    if (hpbwDeg === null && tiltBeamwidths > 0) {
+      steeringAvailable = false;
+      warnings.push(warning('no-beamwidth-for-offset', 'outside-validity', 'This aperture is too small to have a half-power beamwidth, so a tilt in beamwidths has no meaning; give the feed offset as a length.', ['feedOffsetM', 'beamTiltDeg']));
+    }
+    const tiltDeg = steeringAvailable ? tiltBeamwidths * (hpbwDeg as number) : 0;
+    if (tiltDeg / bdf >= 80) {
+      steeringAvailable = false;
+      warnings.push(warning('tilt-out-of-reach', 'outside-validity', `A tilt of ${tiltDeg.toFixed(0)}° needs a feed offset angle beyond 80°: far outside what a lateral feed offset can do.`, ['feedOffsetM', 'beamTiltDeg']));
+    }
+    offsetM = tiltBeamwidths === 0 || !steeringAvailable ? 0 : feedOffsetForTiltM(degToRad(tiltDeg), focalM, bdf);
   }
   const offsetAngleDeg = radToDeg(feedOffsetAngleRad(offsetM, focalM));
   const beamTiltDeg = bdf * offsetAngleDeg;
@@ -255,6 +264,7 @@ export function computeReflector(inputs: CalcInputs): CalcResult<ReflectorData> 
   ];
   const percent = (x: number) => 100 * x;
 
+  const steering = (value: number | null) => (steeringAvailable ? value : null);
   return {
     values: {
       gainDbi,
@@ -277,7 +287,7 @@ export function computeReflector(inputs: CalcInputs): CalcResult<ReflectorData> 
       strutDb: powerRatioToDb(strut),
       otherPercent: percent(other),
       otherDb: -otherLossDb,
-      ruzePeakFrequencyHz: rmsM > 0 ? SPEED_OF_LIGHT_M_PER_S / ruzePeakGainWavelengthM(rmsM) : null,
+      ruzePeakFrequencyHz: rmsM > 0 && Number.isFinite(SPEED_OF_LIGHT_M_PER_S / rmsM) ? SPEED_OF_LIGHT_M_PER_S / ruzePeakGainWavelengthM(rmsM) : null,
       focalLengthM: focalM,
       depthM: dishDepthM(diameterM, focalM),
       rimHalfAngleDeg: radToDeg(psi0),
@@ -296,17 +306,17 @@ export function computeReflector(inputs: CalcInputs): CalcResult<ReflectorData> 
       pointingTenthDbDeg: pointingTenthDeg,
       pointingOneDbDeg: pointingOneDeg,
       beamDeviationFactor: bdf,
-      feedOffsetM: offsetM,
-      feedOffsetAngleDeg: offsetAngleDeg,
-      beamTiltDeg,
-      beamTiltBeamwidths,
-      beamPeakDeg: radToDeg(single.peakTiltRad),
-      scanLossDb: single.scanLossDb,
-      beamSpacingDeg,
+      feedOffsetM: steering(offsetM),
+      feedOffsetAngleDeg: steering(offsetAngleDeg),
+      beamTiltDeg: steering(beamTiltDeg),
+      beamTiltBeamwidths: steering(beamTiltBeamwidths),
+      beamPeakDeg: steering(radToDeg(single.peakTiltRad)),
+      scanLossDb: steering(single.scanLossDb),
+      beamSpacingDeg: steering(beamSpacingDeg),
       beamSpacingBeamwidths: beamSpacingDeg === null || hpbwDeg === null ? null : beamSpacingDeg / hpbwDeg,
-      crossoverDb,
-      outerBeamTiltDeg: isCluster ? bdf * radToDeg(feedOffsetAngleRad(outerOffsetM, focalM)) : null,
-      outerScanLossDb: outer ? outer.scanLossDb : isCluster ? 0 : null,
+      crossoverDb: steering(crossoverDb),
+      outerBeamTiltDeg: isCluster && steeringAvailable ? bdf * radToDeg(feedOffsetAngleRad(outerOffsetM, focalM)) : null,
+      outerScanLossDb: outer ? outer.scanLossDb : isCluster && steeringAvailable ? 0 : null,
     },
     warnings,
     data: { budget, pattern, beams, powerExponent: q },
