@@ -16,3 +16,5 @@ export * from './numeric/gaussLegendre';
 export * from './numeric/brentRoot';
 export * from './numeric/goldenMinimize';
 export * from './numeric/besselJ';
+export * from './reflector/index';
+export * from './reflectorFormulas';

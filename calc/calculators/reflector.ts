@@ -442,6 +442,11 @@ export function createReflectorCalculator(conventions: TeamConventions): Calcula
       'W. L. Stutzman and G. A. Thiele, Antenna Theory and Design, 3rd ed., Wiley, 2012 (reflector antennas, aperture blockage).',
       'IEEE Std 145 (definitions of terms for antennas); IEEE Std 149 (test procedures for antennas, far-field distance).',
     ],
+    examples: [
+      { title: 'Ground-station dish for a polar-orbit downlink, 8.2 GHz, 3.7 m, f/D 0.38', query: '?v=1&f=8.2GHz&solve=gain&d=3.7m&fd=0.38&feed=taper&et=-11dB&rms=0.6mm&blk=28cm&strut=0.025&loss=0.4dB&offby=length&off=0cm&n=1' },
+      { title: 'Radio-astronomy outreach dish sized for 38 dBi at 1.42 GHz', query: '?v=1&f=1.42GHz&solve=diameter&g=38dB&fd=0.45&feed=exponent&q=2.4&rms=2mm&blk=35cm&strut=0.04&loss=0.5dB&offby=length&off=0cm&n=1' },
+      { title: 'Three-beam feed cluster for a coastal weather radar, 5.6 GHz, 4.2 m, beams 1.1 HPBW apart', query: '?v=1&f=5.6GHz&solve=gain&d=4.2m&fd=0.42&feed=taper&et=-12dB&rms=0.4mm&blk=30cm&strut=0.03&loss=0.3dB&offby=beamwidths&offbw=1.1&n=3' },
+    ],
     sourcePath: 'calc/calculators/reflector.ts',
     compute: computeReflector,
   };
