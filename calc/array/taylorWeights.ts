@@ -40,6 +40,7 @@ export function taylorAt(coefficients: Float64Array, t: number): number {
 export function taylorLineWeights(count: number, nbar: number, sidelobeDb: number, normalize = true): Float64Array {
   requireElementCount('count', count);
   const coefficients = taylorCoefficients(nbar, sidelobeDb);
+  if (count === 1) return Float64Array.of(1); // a single element is unweighted (as SciPy)
   const scale = normalize ? 1 / taylorAt(coefficients, 0) : 1;
   const weights = new Float64Array(count);
   for (let n = 0; n < count; n++) weights[n] = scale * taylorAt(coefficients, (2 * n - count + 1) / count);
