@@ -12,18 +12,17 @@ export function fillPhasorTable(re: Float64Array, im: Float64Array, count: numbe
   const stepPhase = TWO_PI * pitchWavelengths * directionCosine;
   const stepRe = Math.cos(stepPhase);
   const stepIm = Math.sin(stepPhase);
-  let cRe = 0, cIm = 0;
-  for (let i = 0; i < count; i++) {
-    if (i % RESEED_INTERVAL === 0) {
-      const phase = TWO_PI * (originWavelengths + i * pitchWavelengths) * directionCosine;
-      cRe = Math.cos(phase);
-      cIm = Math.sin(phase);
+  for (let start = 0; start < count; start += RESEED_INTERVAL) {
+    const phase = TWO_PI * (originWavelengths + start * pitchWavelengths) * directionCosine;
+    let cRe = Math.cos(phase), cIm = Math.sin(phase);
+    const stop = Math.min(count, start + RESEED_INTERVAL);
+    for (let i = start; i < stop; i++) {
+      re[i] = cRe;
+      im[i] = cIm;
+      const nextRe = cRe * stepRe - cIm * stepIm;
+      cIm = cRe * stepIm + cIm * stepRe;
+      cRe = nextRe;
     }
-    re[i] = cRe;
-    im[i] = cIm;
-    const nextRe = cRe * stepRe - cIm * stepIm;
-    cIm = cRe * stepIm + cIm * stepRe;
-    cRe = nextRe;
   }
 }
 
@@ -34,21 +33,44 @@ export function lineSum(weights: ComplexWeights, originWavelengths: number, pitc
   const stepPhase = TWO_PI * pitchWavelengths * directionCosine;
   const stepRe = Math.cos(stepPhase);
   const stepIm = Math.sin(stepPhase);
-  let sumRe = 0, sumIm = 0, cRe = 0, cIm = 0;
-  for (let i = 0; i < count; i++) {
-    if (i % RESEED_INTERVAL === 0) {
-      const phase = TWO_PI * (originWavelengths + i * pitchWavelengths) * directionCosine;
-      cRe = Math.cos(phase);
-      cIm = Math.sin(phase);
+  let sumRe = 0, sumIm = 0;
+  for (let start = 0; start < count; start += RESEED_INTERVAL) {
+    const phase = TWO_PI * (originWavelengths + start * pitchWavelengths) * directionCosine;
+    let cRe = Math.cos(phase), cIm = Math.sin(phase);
+    const stop = Math.min(count, start + RESEED_INTERVAL);
+    for (let i = start; i < stop; i++) {
+      const a = wr[i], b = wi[i];
+      sumRe += a * cRe - b * cIm;
+      sumIm += a * cIm + b * cRe;
+      const nextRe = cRe * stepRe - cIm * stepIm;
+      cIm = cRe * stepIm + cIm * stepRe;
+      cRe = nextRe;
     }
-    sumRe += wr[i] * cRe - wi[i] * cIm;
-    sumIm += wr[i] * cIm + wi[i] * cRe;
-    const nextRe = cRe * stepRe - cIm * stepIm;
-    cIm = cRe * stepIm + cIm * stepRe;
-    cRe = nextRe;
   }
   out[0] = sumRe;
   out[1] = sumIm;
+}
+
+interface DenseLattice { re: Float64Array; im: Float64Array; rowStart: Int32Array; rowStop: Int32Array }
+const denseCache = new WeakMap<ArrayModel, DenseLattice>();
+
+/** The model's weights laid out on its lattice (rows × columns, zeros at empty sites), cached per model. */
+function denseLatticeWeights(model: ArrayModel): DenseLattice {
+  const hit = denseCache.get(model);
+  if (hit && hit.re.length === model.lattice!.rows * model.lattice!.columns) return hit;
+  const { columns, rows, column, row } = model.lattice!;
+  const re = new Float64Array(rows * columns), im = new Float64Array(rows * columns);
+  const rowStart = new Int32Array(rows).fill(columns), rowStop = new Int32Array(rows);
+  for (let n = 0; n < column.length; n++) {
+    const k = row[n] * columns + column[n];
+    re[k] += model.weights.re[n];
+    im[k] += model.weights.im[n];
+    rowStart[row[n]] = Math.min(rowStart[row[n]], column[n]);
+    rowStop[row[n]] = Math.max(rowStop[row[n]], column[n] + 1);
+  }
+  const dense = { re, im, rowStart, rowStop };
+  denseCache.set(model, dense);
+  return dense;
 }
 
 /** Which algorithm evaluates a model's array factor at arbitrary directions. */
@@ -92,19 +114,26 @@ export function arrayFactorAtDirections(model: ArrayModel, u: ArrayLike<number>,
   const elements = wr.length;
   if (path !== 'direct' && model.lattice) {
     const lattice = model.lattice;
-    const { column, row } = lattice;
-    const exRe = new Float64Array(lattice.columns), exIm = new Float64Array(lattice.columns);
-    const eyRe = new Float64Array(lattice.rows), eyIm = new Float64Array(lattice.rows);
+    const columns = lattice.columns, rows = lattice.rows;
+    const dense = denseLatticeWeights(model);
+    const exRe = new Float64Array(columns), exIm = new Float64Array(columns);
+    const eyRe = new Float64Array(rows), eyIm = new Float64Array(rows);
+    const { re: gRe, im: gIm, rowStart, rowStop } = dense;
     for (let i = 0; i < count; i++) {
-      fillPhasorTable(exRe, exIm, lattice.columns, lattice.originXWavelengths, lattice.pitchXWavelengths, u[i]);
-      fillPhasorTable(eyRe, eyIm, lattice.rows, lattice.originYWavelengths, lattice.pitchYWavelengths, v[i]);
+      fillPhasorTable(exRe, exIm, columns, lattice.originXWavelengths, lattice.pitchXWavelengths, u[i]);
+      fillPhasorTable(eyRe, eyIm, rows, lattice.originYWavelengths, lattice.pitchYWavelengths, v[i]);
       let sumRe = 0, sumIm = 0;
-      for (let n = 0; n < elements; n++) {
-        const c = column[n], r = row[n];
-        const pr = exRe[c] * eyRe[r] - exIm[c] * eyIm[r];
-        const pi = exRe[c] * eyIm[r] + exIm[c] * eyRe[r];
-        sumRe += wr[n] * pr - wi[n] * pi;
-        sumIm += wr[n] * pi + wi[n] * pr;
+      for (let r = 0; r < rows; r++) {
+        // Row sum S_r = Σ_c W[r, c]·e^{j2π x_c u}, then Σ_r S_r·e^{j2π y_r v}.
+        let rowRe = 0, rowIm = 0;
+        const base = r * columns;
+        for (let c = rowStart[r]; c < rowStop[r]; c++) {
+          const a = gRe[base + c], b = gIm[base + c], er = exRe[c], ei = exIm[c];
+          rowRe += a * er - b * ei;
+          rowIm += a * ei + b * er;
+        }
+        sumRe += rowRe * eyRe[r] - rowIm * eyIm[r];
+        sumIm += rowRe * eyIm[r] + rowIm * eyRe[r];
       }
       out[2 * i] = sumRe;
       out[2 * i + 1] = sumIm;
