@@ -24,14 +24,17 @@ function worstSidelobe(planes: PlaneMetrics[]): number | undefined {
 /**
  * Pointing error and sidelobe change from quantizing every phase to B bits (deterministic
  * rounding). The pointing error is √(δθ² + δφ²) of the peak offsets found in the two principal
- * planes, relative to the same offsets with continuous phases (so element-pattern pull is not counted).
+ * planes, relative to the same offsets with continuous phases (so element-pattern pull is not counted);
+ * for a linear array, whose beam is a cone about its axis, only the scan plane (φ = φ0) counts.
  */
 export function phaseQuantizationEffect(spec: ArraySpec, phaseBits: number): QuantizationEffect {
   requireInteger('phaseBits', phaseBits, 1, 24);
   const ideal = principalPlaneMetrics(buildArrayModel({ ...spec, phaseBits: undefined }));
   const quantized = principalPlaneMetrics(buildArrayModel({ ...spec, phaseBits }));
   const dTheta = quantized.theta.peakOffsetDeg - ideal.theta.peakOffsetDeg;
-  const dPhi = quantized.phi.peakOffsetDeg - ideal.phi.peakOffsetDeg;
+  // A line's pattern is a cone about its axis: along the orthogonal plane the peak is not a point, so only the scan plane counts.
+  const isLine = buildArrayModel(spec).lattice?.kind === 'line';
+  const dPhi = isLine ? 0 : quantized.phi.peakOffsetDeg - ideal.phi.peakOffsetDeg;
   return {
     phaseBits,
     phaseStepDeg: 360 / 2 ** phaseBits,
