@@ -25,7 +25,7 @@ function worstSidelobe(planes: PlaneMetrics[]): number | undefined {
  * Pointing error and sidelobe change from quantizing every phase to B bits (deterministic
  * rounding). The pointing error is √(δθ² + δφ²) of the peak offsets found in the two principal
  * planes, relative to the same offsets with continuous phases (so element-pattern pull is not counted);
- * for a linear array, whose beam is a cone about its axis, only the scan plane (φ = φ0) counts.
+ * for a linear array, whose beam is a cone about its axis, only the scan plane (φ = φ0) counts, for sidelobes too.
  */
 export function phaseQuantizationEffect(spec: ArraySpec, phaseBits: number): QuantizationEffect {
   requireInteger('phaseBits', phaseBits, 1, 24);
@@ -39,7 +39,7 @@ export function phaseQuantizationEffect(spec: ArraySpec, phaseBits: number): Qua
     phaseBits,
     phaseStepDeg: 360 / 2 ** phaseBits,
     pointingErrorDeg: Math.hypot(dTheta, dPhi),
-    peakSidelobeDb: worstSidelobe([ideal.theta, ideal.phi]),
-    quantizedPeakSidelobeDb: worstSidelobe([quantized.theta, quantized.phi]),
+    peakSidelobeDb: worstSidelobe(isLine ? [ideal.theta] : [ideal.theta, ideal.phi]),
+    quantizedPeakSidelobeDb: worstSidelobe(isLine ? [quantized.theta] : [quantized.theta, quantized.phi]),
   };
 }
