@@ -46,3 +46,5 @@ export type { ElementTable } from './elementTable';
 export { elementTable } from './elementTable';
 export type { QuantizationEffect } from './quantizationEffect';
 export { phaseQuantizationEffect } from './quantizationEffect';
+export type { FiguresOfMerit } from './figuresOfMerit';
+export { figuresOfMerit } from './figuresOfMerit';
