@@ -19,3 +19,7 @@ export * from './numeric/besselJ';
 export * from './reflector/index';
 export * from './reflectorFormulas';
 export * from './array/index';
+export * from './link/friis';
+export * from './exposure/powerDensity';
+export * from './exposure/referenceLevels';
+export * from './linkFormulas';

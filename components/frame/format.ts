@@ -71,7 +71,7 @@ export function formatQuantity(value: number, kind: QuantityKind | 'percent' | '
     case 'decibel':
       return { text: formatFixedDb(value), unit: unitOverride ?? 'dB' };
     case 'power': {
-      if (unitOverride === 'dBm') return { text: formatFixedDb(10 * Math.log10(value) + 30), unit: 'dBm' };
+      if (unitOverride === 'dBm' || (value > 0 && value < 1e-6)) return { text: formatFixedDb(10 * Math.log10(value) + 30), unit: 'dBm' };
       if (Math.abs(value) >= 1e3) return { text: formatSignificant(value / 1e3, digits), unit: 'kW' };
       if (Math.abs(value) >= 1 || value === 0) return { text: formatSignificant(value, digits), unit: 'W' };
       if (Math.abs(value) >= 1e-3) return { text: formatSignificant(value * 1e3, digits), unit: 'mW' };
