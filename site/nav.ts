@@ -11,6 +11,11 @@ export const calculators: NavEntry[] = [
     title: 'Wavelength & element spacing',
     summary: 'Wavelengths over a band, the grating-lobe-free spacing for a lattice and scan range, and the element count of an aperture.',
   },
+  {
+    path: 'calculators/range-exposure/',
+    title: 'Link range & RF exposure',
+    summary: 'Friis range or the gain a range needs, free-space loss (ITU-R P.525), EIRP, power density and the distance to an exposure limit.',
+  },
 ];
 
 export const docs: NavEntry[] = [

@@ -17,11 +17,20 @@ export function formatSignificant(value: number, digits: number): string {
   const magnitude = Math.abs(value);
   if (magnitude >= 1e9 || magnitude < 1e-4) {
     const [mantissa, exponent] = value.toExponential(Math.max(0, digits - 1)).split('e');
-    return `${trimZeros(mantissa)}×10^${Number(exponent)}`;
+    return `${trimZeros(mantissa)}×10${toSuperscript(Number(exponent))}`;
   }
   const rounded = Number(value.toPrecision(Math.max(1, digits)));
   const decimals = Math.max(0, digits - 1 - Math.floor(Math.log10(Math.abs(rounded) || 1)));
   return trimZeros(rounded.toFixed(Math.min(decimals, 12)));
+}
+
+const SUPERSCRIPT: Record<string, string> = { '-': '⁻', '0': '⁰', '1': '¹', '2': '²', '3': '³', '4': '⁴', '5': '⁵', '6': '⁶', '7': '⁷', '8': '⁸', '9': '⁹' };
+
+function toSuperscript(exponent: number): string {
+  return String(exponent)
+    .split('')
+    .map((c) => SUPERSCRIPT[c] ?? c)
+    .join('');
 }
 
 function trimZeros(text: string): string {

@@ -44,3 +44,10 @@ describe('canonicalToFieldText', () => {
     expect(canonicalToFieldText('triangular')).toBe('triangular');
   });
 });
+
+describe('scientific notation', () => {
+  it('uses a superscript exponent for very small and very large values', () => {
+    expect(formatSignificant(1.99e-6, 3)).toBe('1.99×10⁻⁶');
+    expect(formatSignificant(2.5e12, 2)).toBe('2.5×10¹²');
+  });
+});
