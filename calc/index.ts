@@ -23,3 +23,5 @@ export * from './link/friis';
 export * from './exposure/powerDensity';
 export * from './exposure/referenceLevels';
 export * from './linkFormulas';
+export * from './scanLoss';
+export * from './scanLossFormulas';

@@ -2,5 +2,6 @@
 import type { ReferenceGroup } from './referenceCase';
 import { formulaExampleCases, wavelengthCases } from './wavelength.cases';
 import { linkExposureCases } from './linkExposure.cases';
+import { scanLossCases } from './scanLoss.cases';
 
-export const referenceGroups: ReferenceGroup[] = [wavelengthCases, linkExposureCases, formulaExampleCases];
+export const referenceGroups: ReferenceGroup[] = [wavelengthCases, scanLossCases, linkExposureCases, formulaExampleCases];
