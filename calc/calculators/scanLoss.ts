@@ -73,8 +73,8 @@ export function computeScanLoss(inputs: CalcInputs): CalcResult<ScanLossData> {
   const hpbwEdge = uniformLineHpbwDeg(lineCount, dWl, scanMax);
 
   const sweep: ScanSweepPoint[] = [];
-  const stop = Math.min(85, Math.max(60, scanMax + 15));
-  for (let s = 0; s <= stop + 1e-9; s += stop / 34) {
+  const stop = Math.min(85, Math.max(60, Math.ceil((scanMax + 15) / 5) * 5));
+  for (let s = 0; s <= stop + 1e-9; s += 2.5) {
     const parts = scanLossPartsDb(s, model, exponent);
     sweep.push({ scanDeg: s, ...parts, hpbwDeg: uniformLineHpbwDeg(lineCount, dWl, s), hpbwCosineLawDeg: hpbw0 === null ? null : hpbw0 * beamBroadeningFactor(s) });
   }
