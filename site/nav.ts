@@ -11,6 +11,11 @@ export const calculators: NavEntry[] = [
     title: 'Wavelength & element spacing',
     summary: 'Wavelengths over a band, the grating-lobe-free spacing for a lattice and scan range, and the element count of an aperture.',
   },
+  {
+    path: 'calculators/front-fed-reflector/',
+    title: 'Front-fed parabolic reflector',
+    summary: 'Gain or diameter from an efficiency budget (spillover, taper, surface, blockage), the far-field pattern, the best edge taper, and beam steering by feed offset.',
+  },
 ];
 
 export const docs: NavEntry[] = [

@@ -280,7 +280,7 @@ export function computeReflector(inputs: CalcInputs): CalcResult<ReflectorData> 
     warnings.push(warning('large-feed-offset', 'outside-validity', `A beam is steered ${largestTiltBw.toFixed(1)} beamwidths off axis: beyond about ${MAX_OFFSET_BEAMWIDTHS} beamwidths coma grows quickly, Lo's beam deviation factor drifts, and the scan-loss estimate (aperture integration with the feed kept pointed as on axis) becomes rough.`, ['beamTiltDeg', 'scanLossDb', 'outerScanLossDb']));
   }
   if (isCluster && offsetM > 0 && offsetM < lambda) {
-    warnings.push(warning('close-feeds', 'caution', `Feeds ${(offsetM / lambda).toFixed(2)} λ apart cannot be built with this illumination: a feed giving a ${edgeTaperDb(q, psi0).toFixed(0)} dB edge taper is wider than that.`, ['beamSpacingDeg', 'crossoverDb']));
+    warnings.push(warning('close-feeds', 'caution', `Feeds ${(offsetM / lambda).toFixed(2)} λ apart cannot be built with this illumination: a feed giving a ${edgeTaperDb(q, psi0).toFixed(0).replace('-', '−')} dB edge taper is wider than that.`, ['beamSpacingDeg', 'crossoverDb']));
   }
 
   const row = (key: string, label: string, efficiency: number): BudgetRow => ({ key, label, efficiency, percent: 100 * efficiency, decibels: powerRatioToDb(efficiency) });
