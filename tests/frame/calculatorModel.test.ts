@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { defaultTexts, evaluate, safeCompute, validateField } from '../../components/frame/calculatorModel';
 import { createWavelengthSpacingCalculator } from '../../calc/calculators/wavelengthSpacing';
+import { createReflectorCalculator } from '../../calc/calculators/reflector';
 import { teamConventions } from '../../site/conventions';
 import type { CalculatorDef } from '../../calc/calculator';
 
@@ -28,6 +29,17 @@ describe('evaluate: last good result stays visible, marked stale', () => {
   it('λ-relative spacing uses the highest frequency of the band', () => {
     const ev = evaluate(def, { ...defaultTexts(def), f: '8 GHz', fhi: '12 GHz', d: '0.5 λ' }, null);
     expect(ev.result!.values.chosenWavelengths).toBeCloseTo(0.5, 12);
+  });
+  it('a CalcInputError naming an input marks that field with the reason, keeps the last good result and says it in the banner', () => {
+    const reflector = createReflectorCalculator(teamConventions);
+    const good = evaluate(reflector, defaultTexts(reflector), null);
+    const bad = evaluate(reflector, { ...defaultTexts(reflector), d: '1.2 m', blk: '1.5 m' }, good.result);
+    expect(bad.stale).toBe(true);
+    expect(bad.result).toBe(good.result);
+    expect(bad.fields.blk.ok).toBe(false);
+    expect(!bad.fields.blk.ok && bad.fields.blk.message).toMatch(/^Not possible with the other inputs: expected a blockage diameter smaller than the dish diameter 1\.2 m, got 1\.5 m\.$/);
+    expect(bad.fields.d.ok).toBe(true);
+    expect(bad.error).toMatch(/^Central blockage diameter: expected a blockage diameter smaller/);
   });
   it('a compute that throws or returns a non-finite value is caught, never shown', () => {
     const throwing = { ...def, compute: () => { throw new Error('boom'); } } as CalculatorDef<unknown>;
