@@ -147,3 +147,17 @@ export function evaluate<Data>(def: CalculatorDef<Data>, texts: FieldTexts, prev
   }
   return { fields, result: computed.result, stale: false, error: null };
 }
+
+/**
+ * Why a field is not read with the current choices (its spec's `usedWhen`), e.g.
+ * 'Solve for is “Gain (diameter given)”'; null when it is used. Fields keep their text and are
+ * still validated, so a link restores them and switching the choice back needs no retyping.
+ */
+export function unusedReason(def: CalculatorDef<unknown>, spec: ParamSpec, texts: FieldTexts): string | null {
+  if (!spec.usedWhen) return null;
+  const choice = def.params.find((p) => p.key === spec.usedWhen!.key);
+  const current = (texts[spec.usedWhen.key] ?? '').trim();
+  if (!choice || choice.kind !== 'choice' || spec.usedWhen.values.includes(current)) return null;
+  const option = choice.options.find((o) => o.value === current);
+  return option ? `${choice.label} is “${option.label}”` : null;
+}

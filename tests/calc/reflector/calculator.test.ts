@@ -141,6 +141,19 @@ describe('reflector calculator definition', () => {
     expect(codes({ offsetSpec: 'beamwidths', beamTiltBeamwidths: 4 })).toContain('large-feed-offset');
     expect(codes({ blockageDiameterM: 0.4 })).toContain('large-blockage');
   });
+  it('usedWhen tells the truth: with each choice, the parameters marked unused are not read (NaN there changes nothing)', () => {
+    const choices = def.params.filter((p) => p.kind === 'choice');
+    for (const choice of choices) {
+      if (choice.kind !== 'choice') continue;
+      for (const option of choice.options) {
+        const inputs = { ...defaults(), [choice.name]: option.value, feedCount: 3 };
+        const unused = def.params.filter((p) => p.usedWhen?.key === choice.key && !p.usedWhen.values.includes(option.value));
+        const poisoned = { ...inputs, ...Object.fromEntries(unused.map((p) => [p.name, Number.NaN])) };
+        expect(def.compute(poisoned).values, `${choice.key}=${option.value}`).toEqual(def.compute(inputs).values);
+      }
+    }
+    expect(def.params.filter((p) => p.usedWhen).map((p) => p.key).sort()).toEqual(['d', 'et', 'g', 'off', 'offbw', 'q']);
+  });
   it('states the exposure caution once among the assumptions', () => {
     expect(def.assumptions.filter((a) => /exposure/i.test(a)).length).toBe(1);
   });
