@@ -1,6 +1,8 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Browser, Page } from 'playwright-core';
 import { launch, openPage, outputText, siteUrl, typeInto, waitForCalculator } from './browser';
+import { createReflectorCalculator } from '../../calc/calculators/reflector';
+import { teamConventions } from '../../site/conventions';
 
 const ID = 'front-fed-reflector';
 const PATTERN_PATH = '[data-plot="far-field-pattern-of-the-on-axis-feed"] path[data-series="pattern"]';
@@ -108,7 +110,7 @@ describe('front-fed reflector calculator in Chromium', () => {
     for (const input of await page.locator(`[data-calculator="${ID}"] input, [data-calculator="${ID}"] select`).all()) {
       texts[(await input.getAttribute('id'))!] = await input.inputValue();
     }
-    expect(Object.keys(texts).length).toBe(15);
+    expect(Object.keys(texts).sort()).toEqual(createReflectorCalculator(teamConventions).params.map((p) => `${ID}-${p.key}`).sort());
     const shown = { gain: await outputText(page, 'gainDbi'), crossover: await outputText(page, 'crossoverDb') };
 
     const second = await openPage(browser);
@@ -142,5 +144,23 @@ describe('front-fed reflector calculator in Chromium', () => {
     expect(outside).toEqual([]);
     expect(errors).toEqual([]);
     await context.close();
+  });
+
+  it('loads only from its own origin in both themes, and every input has a visible label', async () => {
+    for (const scheme of ['light', 'dark'] as const) {
+      const { page, outside, errors, context } = await openPage(browser, { colorScheme: scheme });
+      const response = await page.goto(siteUrl(`calculators/${ID}/?v=1&offby=length&off=3cm&n=2`));
+      expect(response?.status()).toBe(200);
+      await waitForCalculator(page, ID);
+      await page.waitForLoadState('networkidle');
+      expect(await page.locator('[data-testid="beam-table"] tbody tr').count()).toBe(2);
+      const unlabeled = await page.evaluate(() =>
+        [...document.querySelectorAll('.calc input, .calc select')].filter((el) => !document.querySelector(`label[for="${el.id}"]`)).length,
+      );
+      expect(unlabeled).toBe(0);
+      expect(outside).toEqual([]);
+      expect(errors).toEqual([]);
+      await context.close();
+    }
   });
 });
