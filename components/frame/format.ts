@@ -10,10 +10,14 @@ export interface Formatted {
   unit: string;
 }
 
-/** Rounds to `digits` significant digits and drops trailing zeros; plain notation for 1e-4…1e9. */
+/**
+ * Rounds to `digits` significant digits and drops trailing zeros; plain notation for 1e-4…1e9.
+ * Negative numbers get a true minus sign (U+2212), as in decibels and plot ticks.
+ */
 export function formatSignificant(value: number, digits: number): string {
   if (!Number.isFinite(value)) return '—';
   if (value === 0) return '0';
+  if (value < 0) return `−${formatSignificant(-value, digits)}`;
   const magnitude = Math.abs(value);
   if (magnitude >= 1e9 || magnitude < 1e-4) {
     const [mantissa, exponent] = value.toExponential(Math.max(0, digits - 1)).split('e');
