@@ -25,3 +25,4 @@ export * from './exposure/referenceLevels';
 export * from './linkFormulas';
 export * from './scanLoss';
 export * from './scanLossFormulas';
+export * from './sizing/index';

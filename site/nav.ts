@@ -7,6 +7,11 @@ export interface NavEntry {
 
 export const calculators: NavEntry[] = [
   {
+    path: 'calculators/architecture-sizing/',
+    title: 'Architecture sizing',
+    summary: 'Every architecture — reflector, end-fire, linear, planar, circular and Y arrays — sized to one gain or beamwidth requirement, side by side, with what rules each out.',
+  },
+  {
     path: 'calculators/wavelength-spacing/',
     title: 'Wavelength & element spacing',
     summary: 'Wavelengths over a band, the grating-lobe-free spacing for a lattice and scan range, and the element count of an aperture.',

@@ -8,10 +8,12 @@ import { createWavelengthSpacingCalculator } from './wavelengthSpacing';
 import { createReflectorCalculator } from './reflector';
 import { createRangeExposureCalculator } from './rangeExposure';
 import { createScanLossCalculator } from './scanLoss';
+import { createArchitectureSizingCalculator } from './architectureSizing';
 
 export const calculatorFactories: Record<string, (conventions: TeamConventions) => CalculatorDef<unknown>> = {
   'wavelength-spacing': createWavelengthSpacingCalculator as (c: TeamConventions) => CalculatorDef<unknown>,
   'front-fed-reflector': createReflectorCalculator as (c: TeamConventions) => CalculatorDef<unknown>,
   'range-exposure': createRangeExposureCalculator as (c: TeamConventions) => CalculatorDef<unknown>,
   'scan-loss': createScanLossCalculator as (c: TeamConventions) => CalculatorDef<unknown>,
+  'architecture-sizing': ((c: TeamConventions) => createArchitectureSizingCalculator(c)) as (c: TeamConventions) => CalculatorDef<unknown>,
 };

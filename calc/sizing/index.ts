@@ -1,0 +1,7 @@
+/** Requirement-to-architecture sizing: re-exports only. */
+export * from './candidate';
+export * from './reflectorCandidate';
+export * from './planarCandidate';
+export * from './lineCandidate';
+export * from './ringCandidates';
+export * from './chooseCandidate';
