@@ -19,3 +19,7 @@ export * from './numeric/besselJ';
 export * from './reflector/index';
 export * from './reflectorFormulas';
 export * from './array/index';
+export * from './endFire/index';
+export * from './endFireFormulas';
+export * from './backplane/index';
+export * from './backplaneFormulas';

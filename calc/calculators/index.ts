@@ -6,8 +6,12 @@ import type { CalculatorDef } from '../calculator';
 import type { TeamConventions } from '../teamConventions';
 import { createWavelengthSpacingCalculator } from './wavelengthSpacing';
 import { createReflectorCalculator } from './reflector';
+import { createEndFireLengthCalculator } from './endFireLength';
+import { createBackplaneSpacingCalculator } from './backplaneSpacing';
 
 export const calculatorFactories: Record<string, (conventions: TeamConventions) => CalculatorDef<unknown>> = {
   'wavelength-spacing': createWavelengthSpacingCalculator as (c: TeamConventions) => CalculatorDef<unknown>,
   'front-fed-reflector': createReflectorCalculator as (c: TeamConventions) => CalculatorDef<unknown>,
+  'end-fire-length': createEndFireLengthCalculator as (c: TeamConventions) => CalculatorDef<unknown>,
+  'backplane-spacing': createBackplaneSpacingCalculator as (c: TeamConventions) => CalculatorDef<unknown>,
 };

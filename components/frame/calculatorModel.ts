@@ -5,6 +5,7 @@
  */
 import type { CalcInputs, CalcResult, CalculatorDef, NumberParamSpec, ParamSpec } from '../../calc/calculator';
 import { freeSpaceWavelengthM } from '../../calc/wavelength';
+import { CalcInputError } from '../../calc/errors';
 import { formatQuantity } from './format';
 import { exampleFor, parseQuantity } from './quantity';
 
@@ -102,7 +103,7 @@ export function validateAll(def: CalculatorDef<unknown>, texts: FieldTexts): { f
 }
 
 /** Runs compute, rejecting any non-finite output so NaN and Infinity never reach the page. */
-export function safeCompute<Data>(def: CalculatorDef<Data>, inputs: CalcInputs): { ok: true; result: CalcResult<Data> } | { ok: false; message: string } {
+export function safeCompute<Data>(def: CalculatorDef<Data>, inputs: CalcInputs): { ok: true; result: CalcResult<Data> } | { ok: false; message: string; parameter?: string } {
   try {
     const result = def.compute(inputs);
     for (const [key, value] of Object.entries(result.values)) {
@@ -113,7 +114,8 @@ export function safeCompute<Data>(def: CalculatorDef<Data>, inputs: CalcInputs):
     return { ok: true, result };
   } catch (error) {
     const message = error instanceof Error ? error.message : String(error);
-    return { ok: false, message: `Cannot compute with these inputs: ${message}` };
+    const parameter = error instanceof CalcInputError ? error.parameter : undefined;
+    return { ok: false, message: `Cannot compute with these inputs: ${message}`, parameter };
   }
 }
 
@@ -125,6 +127,14 @@ export function evaluate<Data>(def: CalculatorDef<Data>, texts: FieldTexts, prev
   const { fields, inputs } = validateAll(def as CalculatorDef<unknown>, texts);
   if (!inputs) return { fields, result: previous, stale: true, error: null };
   const computed = safeCompute(def, inputs);
-  if (!computed.ok) return { fields, result: previous, stale: true, error: computed.message };
+  if (!computed.ok) {
+    // A CalcInputError that names an input (by its calc/ name) is shown at that field.
+    const spec = def.params.find((p) => p.name === computed.parameter);
+    if (spec) {
+      const detail = computed.message.replace(/^Cannot compute with these inputs: [^:]*: /, '');
+      return { fields: { ...fields, [spec.key]: { ok: false, message: `${detail.charAt(0).toUpperCase()}${detail.slice(1)}.` } }, result: previous, stale: true, error: null };
+    }
+    return { fields, result: previous, stale: true, error: computed.message };
+  }
   return { fields, result: computed.result, stale: false, error: null };
 }
