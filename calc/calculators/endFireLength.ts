@@ -68,7 +68,7 @@ export interface EndFireLengthData {
   structure: EndFireStructure;
   spacingWavelengths: number;
   /** Published table, for the figure's marks. */
-  yagiTable: { boomWavelengths: number; gainDbi: number }[];
+  yagiTable: { boomWavelengths: number; gainDbd: number; gainDbi: number }[];
 }
 
 const STRUCTURE_LABEL: Record<EndFireStructure, string> = {
@@ -281,7 +281,7 @@ export function computeEndFireLength(inputs: CalcInputs): CalcResult<EndFireLeng
       design: lengthWavelengths !== null && lengthWavelengths > 0 && gainDbi !== null ? { lengthWavelengths, gainDbi } : null,
       structure,
       spacingWavelengths,
-      yagiTable: NBS_YAGI_DESIGNS.map((row) => ({ boomWavelengths: row.boomWavelengths, gainDbi: row.gainDbd + DIPOLE_DIRECTIVITY_DBI })),
+      yagiTable: NBS_YAGI_DESIGNS.map((row) => ({ boomWavelengths: row.boomWavelengths, gainDbd: row.gainDbd, gainDbi: row.gainDbd + DIPOLE_DIRECTIVITY_DBI })),
     },
   };
 }

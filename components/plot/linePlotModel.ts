@@ -68,11 +68,13 @@ export function prepareLinePlot(
     const pad = (hi - lo) * 0.05;
     yDomain = [lo - pad, hi + pad];
   }
-  const xScale = options.xLog && xDomain[0] > 0
+  const isLog = options.xLog === true && xDomain[0] > 0;
+  const xScale = isLog
     ? scaleLog().domain(xDomain).range([inner.left, inner.right])
     : scaleLinear().domain(xDomain).range([inner.left, inner.right]);
   const yScale = scaleLinear().domain(yDomain).range([inner.bottom, inner.top]).nice(6);
-  const fmtX = options.xTickFormat ?? xScale.tickFormat(7);
+  // Log axes: plain numbers (0.2, 0.5, 2…), not d3's default SI prefixes (200m would read as milli-units).
+  const fmtX = options.xTickFormat ?? (isLog ? xScale.tickFormat(7, '~g') : xScale.tickFormat(7));
   const fmtY = options.yTickFormat ?? yScale.tickFormat(6);
   const [yLo, yHi] = yScale.domain();
   const clampY = (v: number) => Math.min(Math.max(v, Math.min(yLo, yHi)), Math.max(yLo, yHi));
