@@ -50,10 +50,10 @@ describe('backplane spacing calculator in Chromium', () => {
     await typeInto(page, ID, 'fhi', '14 GHz');
     await typeInto(page, ID, 'h', '0.3 λ');
     await typeInto(page, ID, 'er', '2.2');
-    await expect.poll(() => page.url(), { timeout: 5000 }).toContain('h=0.3lambda');
     await expect.poll(() => page.locator('[data-code="spacer-approximation"]').count()).toBe(1);
+    await expect.poll(() => page.url(), { timeout: 5000 }).toContain('er=2.2');
+    expect(page.url()).toContain('h=0.3lambda');
     expect(page.url()).toContain('fhi=14GHz');
-    expect(page.url()).toContain('er=2.2');
     const directivity = await outputText(page, 'directivityDbi');
     const link = page.url();
 
