@@ -26,3 +26,7 @@ export * from './linkFormulas';
 export * from './scanLoss';
 export * from './scanLossFormulas';
 export * from './sizing/index';
+export * from './endFire/index';
+export * from './endFireFormulas';
+export * from './backplane/index';
+export * from './backplaneFormulas';

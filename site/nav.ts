@@ -31,6 +31,16 @@ export const calculators: NavEntry[] = [
     title: 'Link range & RF exposure',
     summary: 'Friis range or the gain a range needs, free-space loss (ITU-R P.525), EIRP, power density and the distance to an exposure limit.',
   },
+  {
+    path: 'calculators/end-fire-length/',
+    title: 'End-fire length vs gain',
+    summary: 'Length of an ordinary or Hansen–Woodyard end-fire array or a Yagi–Uda for a gain, against a broadside aperture of the same length; stacking Yagis.',
+  },
+  {
+    path: 'calculators/backplane-spacing/',
+    title: 'Backplane spacing',
+    summary: 'Spacing of a conducting plane behind dipoles: the λ/4 rule with a spacer, the image factor over a band and scan range, the flattest spacing, and directivity over the plane.',
+  },
 ];
 
 export const docs: NavEntry[] = [

@@ -165,6 +165,7 @@ export function createArchitectureSizingCalculator(conventions: TeamConventions,
     ],
     examples: [
       { title: 'Coastal surveillance radar, 9.2–9.6 GHz, 34 dBi at ±45° azimuth', query: '?v=1&f=9.2GHz&fhi=9.6GHz&req=gain&g=34dBi&saz=45deg&sel=0deg&uaz=no&maxsize=2m&eta=0.6&etar=0.8&nexp=1.3&margin=0.05&lat=triangular&ge=6dBi' },
+      { title: 'Rooftop weather-radar panel, 5.6 GHz, 2.5° beam, ±30° azimuth, square lattice', query: '?v=1&f=5.6GHz&req=hpbw&bw=2.5deg&saz=30deg&sel=0deg&uaz=no&eta=0.6&etar=0.8&nexp=1.3&margin=0.05&lat=rectangular&ge=6dBi' },
       { title: 'Balloon-tracking ground station, 1.68 GHz, 4° beam, ±60° in both planes, 3 m limit', query: '?v=1&f=1.68GHz&req=hpbw&bw=4deg&saz=60deg&sel=60deg&uaz=yes&maxsize=3m&eta=0.6&etar=0.8&nexp=1.3&margin=0.05&lat=triangular&ge=6dBi' },
     ],
     sourcePath: 'calc/calculators/architectureSizing.ts',

@@ -9,6 +9,8 @@ import { createReflectorCalculator } from './reflector';
 import { createRangeExposureCalculator } from './rangeExposure';
 import { createScanLossCalculator } from './scanLoss';
 import { createArchitectureSizingCalculator } from './architectureSizing';
+import { createEndFireLengthCalculator } from './endFireLength';
+import { createBackplaneSpacingCalculator } from './backplaneSpacing';
 
 export const calculatorFactories: Record<string, (conventions: TeamConventions) => CalculatorDef<unknown>> = {
   'wavelength-spacing': createWavelengthSpacingCalculator as (c: TeamConventions) => CalculatorDef<unknown>,
@@ -16,4 +18,6 @@ export const calculatorFactories: Record<string, (conventions: TeamConventions) 
   'range-exposure': createRangeExposureCalculator as (c: TeamConventions) => CalculatorDef<unknown>,
   'scan-loss': createScanLossCalculator as (c: TeamConventions) => CalculatorDef<unknown>,
   'architecture-sizing': ((c: TeamConventions) => createArchitectureSizingCalculator(c)) as (c: TeamConventions) => CalculatorDef<unknown>,
+  'end-fire-length': createEndFireLengthCalculator as (c: TeamConventions) => CalculatorDef<unknown>,
+  'backplane-spacing': createBackplaneSpacingCalculator as (c: TeamConventions) => CalculatorDef<unknown>,
 };

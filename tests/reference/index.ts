@@ -2,7 +2,17 @@
 import type { ReferenceGroup } from './referenceCase';
 import { formulaExampleCases, wavelengthCases } from './wavelength.cases';
 import { reflectorCases } from './reflector.cases';
+import { endFireCases } from './endFire.cases';
+import { backplaneCases } from './backplane.cases';
 import { linkExposureCases } from './linkExposure.cases';
 import { scanLossCases } from './scanLoss.cases';
 
-export const referenceGroups: ReferenceGroup[] = [wavelengthCases, reflectorCases, scanLossCases, linkExposureCases, formulaExampleCases];
+export const referenceGroups: ReferenceGroup[] = [
+  wavelengthCases,
+  reflectorCases,
+  endFireCases,
+  backplaneCases,
+  scanLossCases,
+  linkExposureCases,
+  formulaExampleCases,
+];
