@@ -13,6 +13,7 @@ import { sizeReflector } from '../sizing/reflectorCandidate';
 import { sizePlanarArray } from '../sizing/planarCandidate';
 import { sizeLinearArray } from '../sizing/lineCandidate';
 import { sizeSparseArray } from '../sizing/ringCandidates';
+import { sizeEndFire } from '../sizing/endFireCandidate';
 import { chooseCandidate } from '../sizing/chooseCandidate';
 import { rectangularSpacingLimitFormula, triangularSpacingLimitFormula } from '../wavelengthFormulas';
 import { cosineScanLossFormula } from '../scanLossFormulas';
@@ -52,14 +53,14 @@ export function sizingRequirement(inputs: CalcInputs): SizingRequirement {
   };
 }
 
-/** Sizes every architecture; extra candidates (e.g. end-fire) come from `extraSizers`. */
-export function computeArchitectureSizing(inputs: CalcInputs, extraSizers: ((r: SizingRequirement) => Candidate)[] = []): CalcResult<SizingData> {
+/** Sizes every architecture to the same requirement. */
+export function computeArchitectureSizing(inputs: CalcInputs): CalcResult<SizingData> {
   const requirement = sizingRequirement(inputs);
   const lattice = inputs.lattice as Lattice;
   const warnings: CalcWarning[] = [];
   const candidates: Candidate[] = [
     sizeReflector(requirement),
-    ...extraSizers.map((size) => size(requirement)),
+    sizeEndFire(requirement),
     sizeLinearArray(requirement),
     sizePlanarArray(requirement, lattice),
     sizeSparseArray(requirement, 'ring'),
@@ -102,7 +103,7 @@ export function computeArchitectureSizing(inputs: CalcInputs, extraSizers: ((r: 
   };
 }
 
-export function createArchitectureSizingCalculator(conventions: TeamConventions, extraSizers: ((r: SizingRequirement) => Candidate)[] = []): CalculatorDef<SizingData> {
+export function createArchitectureSizingCalculator(conventions: TeamConventions): CalculatorDef<SizingData> {
   return {
     id: 'architecture-sizing',
     title: 'Architecture sizing',
@@ -155,6 +156,7 @@ export function createArchitectureSizingCalculator(conventions: TeamConventions,
       'Reflector: front-fed, f/D 0.4, −10 dB edge taper, with the assumed aperture efficiency; its beam comes from the reflector calculator’s aperture pattern; it scans mechanically.',
       'Planar array: square face, uniform excitation, directivity 4πA/λ² with the assumed radiation efficiency, scan loss cosⁿθ at the worst scan edge, spacing from the grating-lobe limit with the team margin.',
       'Linear array: array gain N × element gain (elements λ/2 or more apart; common practice, no source); the beam across the array is the element’s.',
+      'Yagi–Uda: a single antenna from the published gain-versus-boom table, rotated to steer; flagged impractical past the longest published boom.',
       'Circular and Y arrays: λ/2 spacing at the highest frequency, isotropic elements over a ground plane (+3 dB), directivity by the engine’s exact pair sum and beamwidths by root-finding on the computed pattern.',
       'The recommended candidate is the smallest by area (the mass proxy) among those with no flags.',
     ],
@@ -169,6 +171,6 @@ export function createArchitectureSizingCalculator(conventions: TeamConventions,
       { title: 'Balloon-tracking ground station, 1.68 GHz, 4° beam, ±60° in both planes, 3 m limit', query: '?v=1&f=1.68GHz&req=hpbw&bw=4deg&saz=60deg&sel=60deg&uaz=yes&maxsize=3m&eta=0.6&etar=0.8&nexp=1.3&margin=0.05&lat=triangular&ge=6dBi' },
     ],
     sourcePath: 'calc/calculators/architectureSizing.ts',
-    compute: (inputs) => computeArchitectureSizing(inputs, extraSizers),
+    compute: (inputs) => computeArchitectureSizing(inputs),
   };
 }

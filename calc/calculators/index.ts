@@ -17,7 +17,7 @@ export const calculatorFactories: Record<string, (conventions: TeamConventions) 
   'front-fed-reflector': createReflectorCalculator as (c: TeamConventions) => CalculatorDef<unknown>,
   'range-exposure': createRangeExposureCalculator as (c: TeamConventions) => CalculatorDef<unknown>,
   'scan-loss': createScanLossCalculator as (c: TeamConventions) => CalculatorDef<unknown>,
-  'architecture-sizing': ((c: TeamConventions) => createArchitectureSizingCalculator(c)) as (c: TeamConventions) => CalculatorDef<unknown>,
+  'architecture-sizing': createArchitectureSizingCalculator as (c: TeamConventions) => CalculatorDef<unknown>,
   'end-fire-length': createEndFireLengthCalculator as (c: TeamConventions) => CalculatorDef<unknown>,
   'backplane-spacing': createBackplaneSpacingCalculator as (c: TeamConventions) => CalculatorDef<unknown>,
 };

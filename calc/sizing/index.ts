@@ -4,4 +4,5 @@ export * from './reflectorCandidate';
 export * from './planarCandidate';
 export * from './lineCandidate';
 export * from './ringCandidates';
+export * from './endFireCandidate';
 export * from './chooseCandidate';

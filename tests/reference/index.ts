@@ -6,6 +6,7 @@ import { endFireCases } from './endFire.cases';
 import { backplaneCases } from './backplane.cases';
 import { linkExposureCases } from './linkExposure.cases';
 import { scanLossCases } from './scanLoss.cases';
+import { sizingCases } from './sizing.cases';
 
 export const referenceGroups: ReferenceGroup[] = [
   wavelengthCases,
@@ -14,5 +15,6 @@ export const referenceGroups: ReferenceGroup[] = [
   backplaneCases,
   scanLossCases,
   linkExposureCases,
+  sizingCases,
   formulaExampleCases,
 ];

@@ -100,3 +100,17 @@ describe('bigger requirements never give smaller antennas (property, fast-check)
     );
   });
 });
+
+describe('end-fire (Yagi–Uda) candidate', () => {
+  it('round-trips with the end-fire module: the boom it picks gives the required gain (NBS TN 688 table, values from memory)', async () => {
+    const { yagiGainDbd } = await import('../../../calc/endFire/yagiGain');
+    const c = candidate({ g: '14 dBi', saz: '0 deg' }, 'endFire');
+    expect(c.flags).toEqual([]);
+    const boom = c.sizeM / freeSpaceWavelengthM(10e9);
+    expect(yagiGainDbd(boom).gainDbd + 2.15).toBeCloseTo(14, 9);
+  });
+  it('is flagged impractical past the longest published boom', () => {
+    expect(candidate({ g: '17.5 dBi' }, 'endFire').flags.join(' ')).toMatch(/impractical/);
+    expect(candidate({ g: '30 dBi' }, 'endFire').flags.join(' ')).toMatch(/impractical/);
+  });
+});
