@@ -6,8 +6,10 @@ import type { CalculatorDef } from '../calculator';
 import type { TeamConventions } from '../teamConventions';
 import { createWavelengthSpacingCalculator } from './wavelengthSpacing';
 import { createReflectorCalculator } from './reflector';
+import { createArrayExplorerCalculator } from './arrayExplorer';
 
 export const calculatorFactories: Record<string, (conventions: TeamConventions) => CalculatorDef<unknown>> = {
   'wavelength-spacing': createWavelengthSpacingCalculator as (c: TeamConventions) => CalculatorDef<unknown>,
   'front-fed-reflector': createReflectorCalculator as (c: TeamConventions) => CalculatorDef<unknown>,
+  'array-explorer': ((c: TeamConventions) => createArrayExplorerCalculator(c)) as (c: TeamConventions) => CalculatorDef<unknown>,
 };
