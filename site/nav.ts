@@ -11,6 +11,11 @@ export const calculators: NavEntry[] = [
     title: 'Wavelength & element spacing',
     summary: 'Wavelengths over a band, the grating-lobe-free spacing for a lattice and scan range, and the element count of an aperture.',
   },
+  {
+    path: 'calculators/array-explorer/',
+    title: 'Array pattern explorer',
+    summary: 'Pattern cut, u–v map, directivity, beamwidths, sidelobes and grating lobes of a steered array, with the element excitation table.',
+  },
 ];
 
 export const docs: NavEntry[] = [
