@@ -25,7 +25,7 @@ export interface UvMap {
 }
 
 /** Lowest level the map keeps, dB. */
-export const UV_FLOOR_DB = -80;
+export const UV_FLOOR_DB = -60;
 
 function gridStep(count: number): number {
   return 2 / count;
