@@ -26,7 +26,7 @@ import {
   type PlaneMetrics,
 } from '../array/index';
 import { explorerArray, inputsKey, type ExplorerGeometry } from '../explorer/explorerInputs';
-import { cutSamples, directivityNeedsQuadrature, patternWork, SYNC_BUDGET_EVALUATIONS } from '../explorer/workEstimate';
+import { cutSamples, directivityNeedsQuadrature, MAX_QUADRATURE_WORK, patternWork, quadratureWork, SYNC_BUDGET_EVALUATIONS } from '../explorer/workEstimate';
 import { frequencyDefaultText } from './defaultText';
 
 /** Parts of the result that may be left to the background worker. */
@@ -72,7 +72,9 @@ export function computeArrayExplorer(inputs: CalcInputs, mode: ExplorerMode = 'c
   const pending: PendingPart[] = [];
 
   const doPattern = mode === 'complete' || patternWork(model) <= SYNC_BUDGET_EVALUATIONS;
-  const doDirectivity = mode === 'complete' || !directivityNeedsQuadrature(model);
+  const quadrature = directivityNeedsQuadrature(model);
+  const quadratureTooCostly = quadrature && quadratureWork(model) > MAX_QUADRATURE_WORK;
+  const doDirectivity = !quadratureTooCostly && (mode === 'complete' || !quadrature);
 
   let cut: ExplorerCut | null = null;
   let theta: PlaneMetrics | null = null;
@@ -94,7 +96,9 @@ export function computeArrayExplorer(inputs: CalcInputs, mode: ExplorerMode = 'c
 
   let directivityDbi: number | null = null;
   if (doDirectivity) directivityDbi = directivity(model).directivityDbi;
-  else pending.push('directivity');
+  else if (quadratureTooCostly) {
+    warnings.push(warning('directivity-too-costly', 'caution', 'With this element pattern and array size, integrating the directivity over the sphere would take minutes, so it is not computed. Use isotropic elements (exact closed form) and add the element pattern\'s own directivity gain by hand, or a smaller array.', ['directivityDbi']));
+  } else pending.push('directivity');
 
   if (pending.length > 0) {
     const parts = [pending.includes('pattern') ? 'the pattern cut, beamwidths and sidelobe level' : '', pending.includes('directivity') ? 'the directivity (integrated over the sphere because of the element pattern)' : ''].filter(Boolean).join(' and ');

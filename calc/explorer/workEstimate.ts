@@ -46,3 +46,20 @@ export function uvMapWork(model: ArrayModel, count: number): number {
 export function directivityNeedsQuadrature(model: ArrayModel): boolean {
   return !isIsotropic(model.element);
 }
+
+/** Largest quadrature the explorer starts (direct-summation units, ≈ 20–40 s in a worker). */
+export const MAX_QUADRATURE_WORK = 2e9;
+
+/**
+ * Cost of directivity by quadrature (calc/array/directivity: 16-node Gauss–Legendre panels,
+ * 2.5 per wavelength of size plus 8, in both angles; a line needs few in the second angle).
+ */
+export function quadratureWork(model: ArrayModel): number {
+  const diameter = arrayDiameterWavelengths(model.positionsWavelengths);
+  const { y, z } = model.positionsWavelengths;
+  const isLine = y.every((value) => value === 0) && z.every((value) => value === 0);
+  const h = model.element.groundPlaneHeightWavelengths ?? 0;
+  const alpha = 16 * (2.5 * diameter + 8 * h + 10);
+  const beta = 16 * (2.5 * (isLine ? 0 : diameter) + 8 * h + 10);
+  return alpha * beta * evaluationsPerDirection(model);
+}

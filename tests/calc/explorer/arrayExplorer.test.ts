@@ -113,3 +113,12 @@ describe('computeArrayExplorer(inputs, mode)', () => {
     expect(defWith.compute(inputsFor({ el: 'cosine', th: '10 deg' })).data.pending).toEqual(['directivity']);
   });
 });
+
+describe('computeArrayExplorer: directivity too costly to integrate', () => {
+  it('a 64 × 64 triangular array with a cosine element skips the quadrature with a caution instead of computing for minutes', () => {
+    const r = computeArrayExplorer(inputsFor({ geo: 'planar', lat: 'triangular', nx: '64', ny: '64', el: 'cosine' }), 'interactive');
+    expect(r.data.pending).not.toContain('directivity');
+    expect(r.values.directivityDbi).toBeNull();
+    expect(r.warnings.find((w) => w.code === 'directivity-too-costly')?.severity).toBe('caution');
+  });
+});
