@@ -16,14 +16,19 @@ function hexToRgb(hex: string): [number, number, number] {
 
 const STOP_RGB = UV_COLOUR_STOPS.map(hexToRgb);
 
-/** RGB colour of a level in dB between floorDb (first stop) and 0 dB (last stop), clamped. */
-export function levelColour(db: number, floorDb: number): [number, number, number] {
+/** Position of a level on the ramp: stop index k and fraction f between stops k and k + 1. */
+function rampPosition(db: number, floorDb: number): [number, number] {
   const t = Number.isFinite(db) ? Math.min(1, Math.max(0, (db - floorDb) / -floorDb)) : 0;
   const position = t * (STOP_RGB.length - 1);
   const k = Math.min(STOP_RGB.length - 2, Math.floor(position));
-  const f = position - k;
+  return [k, position - k];
+}
+
+/** RGB colour of a level in dB between floorDb (first stop) and 0 dB (last stop), clamped. */
+export function levelColour(db: number, floorDb: number): [number, number, number] {
+  const [k, f] = rampPosition(db, floorDb);
   const a = STOP_RGB[k], b = STOP_RGB[k + 1];
-  return [0, 1, 2].map((c) => Math.round(a[c] + (b[c] - a[c]) * f)) as [number, number, number];
+  return [Math.round(a[0] + (b[0] - a[0]) * f), Math.round(a[1] + (b[1] - a[1]) * f), Math.round(a[2] + (b[2] - a[2]) * f)];
 }
 
 /** RGBA pixels (count × count, row 0 = largest v) for levels powerDb[j·count + i] at (u_i, v_j); invisible samples transparent. */
@@ -33,10 +38,14 @@ export function uvMapPixels(count: number, powerDb: ArrayLike<number>, visible: 
     const row = count - 1 - j;
     for (let i = 0; i < count; i++) {
       const k = j * count + i;
-      const p = 4 * (row * count + i);
       if (!visible[k]) continue;
-      const [r, g, b] = levelColour(powerDb[k], floorDb);
-      pixels[p] = r; pixels[p + 1] = g; pixels[p + 2] = b; pixels[p + 3] = 255;
+      const p = 4 * (row * count + i);
+      const [stop, f] = rampPosition(powerDb[k], floorDb);
+      const a = STOP_RGB[stop], b = STOP_RGB[stop + 1];
+      pixels[p] = Math.round(a[0] + (b[0] - a[0]) * f);
+      pixels[p + 1] = Math.round(a[1] + (b[1] - a[1]) * f);
+      pixels[p + 2] = Math.round(a[2] + (b[2] - a[2]) * f);
+      pixels[p + 3] = 255;
     }
   }
   return pixels;
