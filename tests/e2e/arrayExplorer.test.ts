@@ -23,8 +23,8 @@ async function plottedPeakThetaDeg(page: Page): Promise<number> {
     const d = figure.querySelector('path[data-series="cut"]')!.getAttribute('d')!;
     const points = [...d.matchAll(/[ML]\s*(-?[\d.]+(?:e-?\d+)?)[ ,](-?[\d.]+(?:e-?\d+)?)/g)].map((m) => [Number(m[1]), Number(m[2])]);
     const ticks = [...figure.querySelectorAll('.plot-axis text[text-anchor="middle"]')]
-      .map((t) => ({ x: Number(t.getAttribute('x')), value: Number((t.textContent ?? '').replace('−', '-')) }))
-      .filter((t) => Number.isFinite(t.value) && t.textContent !== '');
+      .filter((t) => /^[−-]?\d+$/.test((t.textContent ?? '').trim()))
+      .map((t) => ({ x: Number(t.getAttribute('x')), value: Number((t.textContent ?? '').trim().replace('−', '-')) }));
     const [a, b] = [ticks[0], ticks[ticks.length - 1]];
     const toTheta = (x: number) => a.value + ((x - a.x) * (b.value - a.value)) / (b.x - a.x);
     let best = points[0];
