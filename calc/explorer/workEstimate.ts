@@ -47,8 +47,8 @@ export function directivityNeedsQuadrature(model: ArrayModel): boolean {
   return !isIsotropic(model.element);
 }
 
-/** Largest quadrature the explorer starts (direct-summation units, ≈ 20–40 s in a worker). */
-export const MAX_QUADRATURE_WORK = 2e9;
+/** Largest quadrature the explorer starts (direct-summation units, ≈ 10 s in a worker on an idle core). */
+export const MAX_QUADRATURE_WORK = 8e8;
 
 /**
  * Cost of directivity by quadrature (calc/array/directivity: 16-node Gauss–Legendre panels,

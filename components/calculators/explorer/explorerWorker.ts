@@ -14,7 +14,7 @@ self.onmessage = (event: MessageEvent<{ id: number; job: ExplorerJob }>) => {
   try {
     const result = runExplorerJob(job, (fraction) => {
       const now = performance.now();
-      if (now - lastPost > 50 || fraction >= 1) {
+      if (now - lastPost > 250 || fraction >= 1) {
         lastPost = now;
         post({ id, type: 'progress', fraction });
       }
