@@ -41,6 +41,11 @@ export const calculators: NavEntry[] = [
     title: 'Backplane spacing',
     summary: 'Spacing of a conducting plane behind dipoles: the λ/4 rule with a spacer, the image factor over a band and scan range, the flattest spacing, and directivity over the plane.',
   },
+  {
+    path: 'calculators/array-explorer/',
+    title: 'Array pattern explorer',
+    summary: 'Pattern cut, u–v map, directivity, beamwidths, sidelobes and grating lobes of a steered array, with the element excitation table.',
+  },
 ];
 
 export const docs: NavEntry[] = [

@@ -11,6 +11,7 @@ import { createScanLossCalculator } from './scanLoss';
 import { createArchitectureSizingCalculator } from './architectureSizing';
 import { createEndFireLengthCalculator } from './endFireLength';
 import { createBackplaneSpacingCalculator } from './backplaneSpacing';
+import { createArrayExplorerCalculator } from './arrayExplorer';
 
 export const calculatorFactories: Record<string, (conventions: TeamConventions) => CalculatorDef<unknown>> = {
   'wavelength-spacing': createWavelengthSpacingCalculator as (c: TeamConventions) => CalculatorDef<unknown>,
@@ -20,4 +21,5 @@ export const calculatorFactories: Record<string, (conventions: TeamConventions) 
   'architecture-sizing': createArchitectureSizingCalculator as (c: TeamConventions) => CalculatorDef<unknown>,
   'end-fire-length': createEndFireLengthCalculator as (c: TeamConventions) => CalculatorDef<unknown>,
   'backplane-spacing': createBackplaneSpacingCalculator as (c: TeamConventions) => CalculatorDef<unknown>,
+  'array-explorer': createArrayExplorerCalculator as (c: TeamConventions) => CalculatorDef<unknown>,
 };
