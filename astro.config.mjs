@@ -2,6 +2,7 @@
 import { defineConfig } from 'astro/config';
 import svelte from '@astrojs/svelte';
 import mdx from '@astrojs/mdx';
+import { searchIndex } from './scripts/searchIndexIntegration.ts';
 
 const base = process.env.BASE || '/';
 
@@ -12,7 +13,7 @@ export default defineConfig({
   base,
   trailingSlash: 'ignore',
   output: 'static',
-  integrations: [svelte(), mdx()],
+  integrations: [svelte(), mdx(), searchIndex()],
   build: { format: 'directory', inlineStylesheets: 'never' },
   devToolbar: { enabled: false },
   prefetch: false,

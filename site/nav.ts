@@ -16,5 +16,6 @@ export const calculators: NavEntry[] = [
 export const docs: NavEntry[] = [
   { path: 'conventions/', title: 'Conventions', summary: 'The team defaults every calculator starts from, and the angle convention.' },
   { path: 'formulas/', title: 'Formula reference', summary: 'Every formula the calculators evaluate: symbols and units, validity, source, and where it is shown.' },
+  { path: 'search/', title: 'Search', summary: 'Full-text search over every page, from an index built with the site (works offline).' },
   { path: 'verification/', title: 'Verification record', summary: 'Every check against a published source, with the value the code computed when this site was built.' },
 ];

@@ -1,0 +1,19 @@
+/**
+ * The one mapping from calculator id to its Svelte island. The embed routes
+ * (site/pages/embed/[id].astro) are generated from it, and calculator pages show an "Embed this"
+ * snippet for each id listed here. Adding a calculator: import its island and add one line.
+ */
+import type { Component } from 'svelte';
+import WavelengthSpacing from '../../components/calculators/WavelengthSpacing.svelte';
+
+/** Props every calculator island accepts. */
+export interface IslandProps {
+  /** Query string to start from instead of the defaults. */
+  preset?: string;
+  /** Bind to the page URL (true on a calculator's own page and its embed route). */
+  linked?: boolean;
+}
+
+export const calculatorIslands: Record<string, Component<IslandProps>> = {
+  'wavelength-spacing': WavelengthSpacing,
+};
