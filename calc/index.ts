@@ -18,3 +18,4 @@ export * from './numeric/goldenMinimize';
 export * from './numeric/besselJ';
 export * from './reflector/index';
 export * from './reflectorFormulas';
+export * from './array/index';

@@ -57,7 +57,7 @@ export function spilloverEfficiency(powerExponent: number, rimHalfAngle: number)
 }
 
 /** Taper (illumination) efficiency (linear) for power exponent q and rim half-angle ψ0 (radians). */
-export function taperEfficiency(powerExponent: number, rimHalfAngle: number): number {
+export function reflectorTaperEfficiency(powerExponent: number, rimHalfAngle: number): number {
   return illuminationEfficiencies(powerExponent, rimHalfAngle).taper;
 }
 

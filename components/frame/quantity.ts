@@ -113,7 +113,8 @@ export function exampleFor(kind: QuantityKind): string {
 
 /** Units a kind accepts, canonical spellings, for hints. */
 export function unitsFor(kind: QuantityKind): string[] {
-  return UNITS[kind].units.map((u) => (u.canonical === 'lambda' ? 'λ' : u.canonical === 'W/m2' ? 'W/m²' : u.canonical === 'mW/cm2' ? 'mW/cm²' : u.canonical));
+  const shown: Record<string, string> = { lambda: 'λ', um: 'µm', 'W/m2': 'W/m²', 'mW/cm2': 'mW/cm²', 'uW/cm2': 'µW/cm²' };
+  return UNITS[kind].units.map((u) => shown[u.canonical] ?? u.canonical);
 }
 
 /** Parses text of a given kind into internal units. Never throws. */

@@ -46,8 +46,8 @@ describe('wavelength & spacing calculator in Chromium', () => {
     await expect.poll(() => page.locator('[data-code="grating-lobe-in-scan-range"]').count()).toBe(1);
     await expect.poll(() => page.locator('[data-plot="grating-lobe-onset-against-frequency"] path[data-series="rect"]').count()).toBe(1);
 
-    await expect.poll(() => page.url(), { timeout: 5000 }).toContain('f=12GHz');
-    expect(page.url()).toContain('d=0.7lambda');
+    await expect.poll(() => page.url(), { timeout: 5000 }).toContain('d=0.7lambda');
+    expect(page.url()).toContain('f=12GHz');
     expect(page.url()).toContain('lat=rectangular');
     expect(page.url()).toContain('v=1');
 
@@ -127,6 +127,20 @@ describe('wavelength & spacing calculator in Chromium', () => {
     expect(await page.locator(`#${ID}-scan`).inputValue()).toBe('45 deg');
     expect(await page.locator('[data-output="recommendedM"] th').innerText()).toContain('5 % below the limit');
     expect(outside).toEqual([]);
+    await context.close();
+  });
+
+  it('prints as a one-page record with inputs, results, formulas and the link', async () => {
+    const { page, context } = await openPage(browser);
+    await page.goto(siteUrl('calculators/wavelength-spacing/?v=1&f=8GHz&fhi=12GHz&d=1.5cm&w=50cm'));
+    await waitForCalculator(page, ID);
+    await page.emulateMedia({ media: 'print' });
+    expect(await page.locator('.share-link a').isVisible()).toBe(true);
+    expect(await page.locator('.formula').first().isVisible()).toBe(true);
+    expect(await page.locator('.site-nav').isVisible()).toBe(false);
+    const pdf = (await page.pdf({ format: 'A4', printBackground: true })).toString('latin1');
+    const pages = pdf.match(/\/Type\s*\/Page[^s]/g) ?? [];
+    expect(pages.length).toBe(1);
     await context.close();
   });
 

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { illuminationEfficiencies, optimumIllumination, spilloverEfficiency, taperEfficiency } from '../../../calc/reflector/efficiency';
+import { illuminationEfficiencies, optimumIllumination, spilloverEfficiency, reflectorTaperEfficiency } from '../../../calc/reflector/efficiency';
 import { rimHalfAngleRad } from '../../../calc/reflector/geometry';
 import { edgeTaperDb } from '../../../calc/reflector/feedPattern';
 import { goldenMinimize } from '../../../calc/numeric/goldenMinimize';
@@ -35,7 +35,7 @@ describe('spillover and taper efficiency: closed forms and textbook results', ()
   it('taper for q = 2 at f/D = 0.5 equals the closed form 2[2S/(1+S) − ln(1+S)]²/(S (1 − 0.6³)/3), S = 1/4 (hand-derived; 1e-12)', () => {
     const s = 0.25;
     const i1 = (2 * s) / (1 + s) - Math.log(1 + s);
-    expect(taperEfficiency(2, rimHalfAngleRad(0.5))).toBeCloseTo((2 * i1 * i1) / (s * ((1 - 0.6 ** 3) / 3)), 12);
+    expect(reflectorTaperEfficiency(2, rimHalfAngleRad(0.5))).toBeCloseTo((2 * i1 * i1) / (s * ((1 - 0.6 ** 3) / 3)), 12);
   });
   it('for cos^n feeds n = 2, 4, 6, 8 the best rim angle is about 66°, 53.5°, 46.5°, 42°, with spillover × taper ≈ 0.82–0.83 and an edge taper near −11 dB (Balanis, Antenna Theory, 4th ed., §15.4.1, figure of aperture efficiency vs ψ0 for cos^n feeds; angles read from the figure, ±1.5°)', () => {
     for (const [n, psiDeg] of [[2, 66], [4, 53.5], [6, 46.5], [8, 42]] as const) {

@@ -1,0 +1,181 @@
+import FFT from 'fft.js';
+import { CalcInputError } from '../errors';
+import { compositeGaussLegendre } from '../numeric/gaussLegendre';
+import { isIsotropic } from './elementPattern';
+import { arrayDiameterWavelengths } from './geometry';
+import { sinc } from './linearDirectivity';
+import { patternPowerAtDirections } from './patternPower';
+import { directionCosines } from './steering';
+import type { ArrayModel, DirectionDeg } from './types';
+
+/** Largest element count for the O(N²) pair sum on arrays without a lattice index. */
+export const MAX_PAIR_SUM_ELEMENTS = 16_384;
+
+/** How a directivity was computed. */
+export type DirectivityMethod = 'closedForm' | 'quadrature';
+
+/** Directivity toward a direction, linear and in dBi, and the method used. */
+export interface DirectivityResult {
+  directivity: number;
+  directivityDbi: number;
+  method: DirectivityMethod;
+  /** Number of directions sampled (quadrature) or pair terms summed (closed form). */
+  evaluations: number;
+}
+
+const TWO_PI = 2 * Math.PI;
+
+/** Σ_m Σ_n w_m w_n* sinc(2π|r_m − r_n|) (positions in λ): 1/(4π) × ∫|AF|² dΩ for isotropic elements. */
+function pairSum(model: ArrayModel): { value: number; terms: number } {
+  const { x, y, z } = model.positionsWavelengths;
+  const { re, im } = model.weights;
+  const count = re.length;
+  let total = 0;
+  for (let m = 0; m < count; m++) {
+    total += re[m] * re[m] + im[m] * im[m];
+    for (let n = m + 1; n < count; n++) {
+      const dx = x[m] - x[n], dy = y[m] - y[n], dz = z[m] - z[n];
+      const correlation = re[m] * re[n] + im[m] * im[n]; // Re(w_m w_n*)
+      total += 2 * correlation * sinc(TWO_PI * Math.sqrt(dx * dx + dy * dy + dz * dz));
+    }
+  }
+  return { value: total, terms: (count * (count + 1)) / 2 };
+}
+
+function nextPowerOfTwo(n: number): number {
+  let p = 2;
+  while (p < n) p *= 2;
+  return p;
+}
+
+/** The same pair sum on a lattice: Σ_Δ R(Δ) sinc(2π|Δr|), with the weight autocorrelation R by 2-D FFT (fft.js). */
+function latticePairSum(model: ArrayModel): { value: number; terms: number } {
+  const lattice = model.lattice!;
+  const px = nextPowerOfTwo(2 * lattice.columns - 1);
+  const py = lattice.rows === 1 ? 1 : nextPowerOfTwo(2 * lattice.rows - 1);
+  const grid = new Float64Array(2 * px * py);
+  const { re, im } = model.weights;
+  for (let n = 0; n < re.length; n++) {
+    const k = 2 * (lattice.row[n] * px + lattice.column[n]);
+    grid[k] += re[n];
+    grid[k + 1] += im[n];
+  }
+  const transformRows = (data: Float64Array, inverse: boolean) => {
+    const fft = new FFT(px);
+    const input = new Float64Array(2 * px), output = new Float64Array(2 * px);
+    for (let r = 0; r < py; r++) {
+      input.set(data.subarray(2 * r * px, 2 * (r + 1) * px));
+      if (inverse) fft.inverseTransform(output, input); else fft.transform(output, input);
+      data.set(output, 2 * r * px);
+    }
+  };
+  const transformColumns = (data: Float64Array, inverse: boolean) => {
+    if (py === 1) return;
+    const fft = new FFT(py);
+    const input = new Float64Array(2 * py), output = new Float64Array(2 * py);
+    for (let c = 0; c < px; c++) {
+      for (let r = 0; r < py; r++) { input[2 * r] = data[2 * (r * px + c)]; input[2 * r + 1] = data[2 * (r * px + c) + 1]; }
+      if (inverse) fft.inverseTransform(output, input); else fft.transform(output, input);
+      for (let r = 0; r < py; r++) { data[2 * (r * px + c)] = output[2 * r]; data[2 * (r * px + c) + 1] = output[2 * r + 1]; }
+    }
+  };
+  transformRows(grid, false);
+  transformColumns(grid, false);
+  for (let k = 0; k < grid.length; k += 2) { grid[k] = grid[k] * grid[k] + grid[k + 1] * grid[k + 1]; grid[k + 1] = 0; }
+  transformColumns(grid, true);
+  transformRows(grid, true);
+  // grid now holds R(Δc, Δr) = Σ w_{n+Δ} w_n* at circular index (Δc mod px, Δr mod py).
+  let total = 0;
+  for (let r = 0; r < py; r++) {
+    const dr = r < py / 2 || py === 1 ? r : r - py;
+    if (Math.abs(dr) >= lattice.rows) continue;
+    for (let c = 0; c < px; c++) {
+      const dc = c < px / 2 ? c : c - px;
+      if (Math.abs(dc) >= lattice.columns) continue;
+      const distance = Math.hypot(dc * lattice.pitchXWavelengths, dr * lattice.pitchYWavelengths);
+      total += grid[2 * (r * px + c)] * sinc(TWO_PI * distance);
+    }
+  }
+  return { value: total, terms: px * py };
+}
+
+function peakPower(model: ArrayModel, direction: DirectionDeg): number {
+  const [u, v, w] = directionCosines(direction.thetaDeg, direction.phiDeg);
+  return patternPowerAtDirections(model, [u], [v], [w])[0];
+}
+
+function evenAtLeast(n: number): number {
+  const k = Math.ceil(n);
+  return k % 2 === 0 ? k : k + 1;
+}
+
+/** ∫ P dΩ over the sphere by composite Gauss–Legendre in both angles of a frame whose pole is the array axis (line) or z. */
+function integratePower(model: ArrayModel, samplesPerWavelength: number): { integral: number; evaluations: number } {
+  const { y, z } = model.positionsWavelengths;
+  const isLine = y.every((value) => value === 0) && z.every((value) => value === 0);
+  const diameter = arrayDiameterWavelengths(model.positionsWavelengths);
+  const perpendicular = isLine ? 0 : diameter;
+  const h = model.element.groundPlaneHeightWavelengths ?? 0;
+  const order = 16;
+  const alphaPanels = evenAtLeast(samplesPerWavelength * diameter + 8 * h + 8);
+  const betaPanels = evenAtLeast(samplesPerWavelength * perpendicular + 8 * h + 8);
+  const alpha = compositeGaussLegendre(0, Math.PI, order, alphaPanels);
+  const beta = compositeGaussLegendre(0, TWO_PI, order, betaPanels);
+  const ringSize = beta.nodes.length;
+  const u = new Float64Array(ringSize), v = new Float64Array(ringSize), w = new Float64Array(ringSize);
+  const cosBeta = beta.nodes.map(Math.cos), sinBeta = beta.nodes.map(Math.sin);
+  let integral = 0;
+  for (let i = 0; i < alpha.nodes.length; i++) {
+    const s = Math.sin(alpha.nodes[i]), c = Math.cos(alpha.nodes[i]);
+    for (let j = 0; j < ringSize; j++) {
+      const a = s * cosBeta[j], b = s * sinBeta[j];
+      if (isLine) { u[j] = c; v[j] = a; w[j] = b; } else { u[j] = a; v[j] = b; w[j] = c; }
+    }
+    const power = patternPowerAtDirections(model, u, v, w);
+    let ring = 0;
+    for (let j = 0; j < ringSize; j++) ring += beta.weights[j] * power[j];
+    integral += alpha.weights[i] * s * ring;
+  }
+  return { integral, evaluations: alpha.nodes.length * ringSize };
+}
+
+/** Options of directivity(). */
+export interface DirectivityOptions {
+  /** Direction, degrees (default the model's beam direction). */
+  direction?: DirectionDeg;
+  /** 'closedForm' (isotropic elements only), 'quadrature', or automatic (default: closed form when the elements are isotropic). */
+  method?: DirectivityMethod;
+  /** Quadrature panels per wavelength of array size (default 2.5; each panel has 16 Gauss–Legendre nodes). */
+  panelsPerWavelength?: number;
+}
+
+/**
+ * Directivity D = 4π·P(û)/∫P dΩ of the total pattern (element × array factor) toward a direction
+ * (IEEE Std 145 definition). Isotropic elements: exact pair sum Σ w_m w_n* sin(kr_mn)/(kr_mn)
+ * (by FFT autocorrelation on lattices). Otherwise: Gauss–Legendre quadrature over the sphere
+ * with the sin θ weight and panel counts scaled by the array's electrical size.
+ */
+export function directivity(model: ArrayModel, options: DirectivityOptions = {}): DirectivityResult {
+  const direction = options.direction ?? model.beam;
+  const isotropic = isIsotropic(model.element);
+  const method = options.method ?? (isotropic ? 'closedForm' : 'quadrature');
+  if (method === 'closedForm' && !isotropic) {
+    throw new CalcInputError('method', 'expected isotropic elements without a ground plane for the closed form; use quadrature');
+  }
+  const peak = peakPower(model, direction);
+  let average: number;
+  let evaluations: number;
+  const count = model.weights.re.length;
+  if (method === 'closedForm' && (model.lattice || count <= MAX_PAIR_SUM_ELEMENTS)) {
+    const sum = model.lattice ? latticePairSum(model) : pairSum(model);
+    average = sum.value;
+    evaluations = sum.terms;
+  } else {
+    const result = integratePower(model, options.panelsPerWavelength ?? 2.5);
+    average = result.integral / (4 * Math.PI);
+    evaluations = result.evaluations;
+  }
+  if (!(average > 0)) throw new CalcInputError('weights', 'expected an array that radiates (all weights are zero or the pattern vanishes)');
+  const d = peak / average;
+  return { directivity: d, directivityDbi: 10 * Math.log10(Math.max(d, 1e-300)), method: method === 'closedForm' && (model.lattice || count <= MAX_PAIR_SUM_ELEMENTS) ? 'closedForm' : 'quadrature', evaluations };
+}
