@@ -3,6 +3,8 @@ import { defineConfig } from 'astro/config';
 import svelte from '@astrojs/svelte';
 import mdx from '@astrojs/mdx';
 import { searchIndex } from './scripts/searchIndexIntegration.ts';
+import remarkMath from 'remark-math';
+import rehypeKatex from 'rehype-katex';
 
 const base = process.env.BASE || '/';
 
@@ -14,6 +16,8 @@ export default defineConfig({
   trailingSlash: 'ignore',
   output: 'static',
   integrations: [svelte(), mdx(), searchIndex()],
+  // Inline $…$ and display $$…$$ maths in Markdown/MDX, rendered to HTML by KaTeX at build time.
+  markdown: { remarkPlugins: [remarkMath], rehypePlugins: [[rehypeKatex, { output: 'htmlAndMathml', strict: 'ignore' }]] },
   build: { format: 'directory', inlineStylesheets: 'never' },
   devToolbar: { enabled: false },
   prefetch: false,

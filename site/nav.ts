@@ -14,6 +14,8 @@ export const calculators: NavEntry[] = [
 ];
 
 export const docs: NavEntry[] = [
+  { path: 'guide/', title: 'Guide', summary: 'How the team reaches high directivity, part by part, with live calculators preset to worked examples.' },
+  { path: 'glossary/', title: 'Glossary', summary: 'The trade terms the calculators use, in our words, following IEEE Std 145 where it defines them.' },
   { path: 'conventions/', title: 'Conventions', summary: 'The team defaults every calculator starts from, and the angle convention.' },
   { path: 'formulas/', title: 'Formula reference', summary: 'Every formula the calculators evaluate: symbols and units, validity, source, and where it is shown.' },
   { path: 'search/', title: 'Search', summary: 'Full-text search over every page, from an index built with the site (works offline).' },

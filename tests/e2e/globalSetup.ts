@@ -11,7 +11,10 @@ export const E2E_BASE = '/rf/';
 
 export default async function setup(project: TestProject) {
   if (!process.env.E2E_SKIP_BUILD || !existsSync('dist-e2e/index.html')) {
-    execSync('npx astro build', { stdio: 'inherit', env: { ...process.env, BASE: E2E_BASE, OUT_DIR: './dist-e2e' } });
+    // Vitest sets BASE_URL, MODE, DEV, PROD and SSR in process.env for its own import.meta.env; a child
+    // build that inherits them renders import.meta.env.BASE_URL as '/' and every href() loses the sub-path.
+    const { BASE_URL: _b, MODE: _m, DEV: _d, PROD: _p, SSR: _s, ...env } = process.env;
+    execSync('npx astro build', { stdio: 'inherit', env: { ...env, BASE: E2E_BASE, OUT_DIR: './dist-e2e' } });
   }
   const { server, origin } = await startStaticServer('dist-e2e', E2E_BASE);
   project.provide('siteUrl', `${origin}${E2E_BASE}`);
