@@ -80,3 +80,6 @@ console.log('\n## Sparse');
 show('random 64 in 20 λ × 20 λ', { geometry: { kind: 'random', count: 64, extentXWavelengths: 20, extentYWavelengths: 20, minSeparationWavelengths: 1, seed: 7 }, element: { kind: 'cosine', exponent: 1 } });
 show('filled 40 × 40 at 0.5 λ (same 20 λ aperture)', { geometry: { kind: 'planar', lattice: 'rectangular', columns: 40, rows: 40, spacingXWavelengths: 0.5 }, element: { kind: 'cosine', exponent: 1 } });
 show('volumetric 4 × 4 × 4 at 0.5 λ', { geometry: { kind: 'volumetric', countX: 4, countY: 4, countZ: 4, spacingWavelengths: 0.5 } });
+show('planar 8 × 8 square 0.5 λ isotropic (same count as the cube)', { geometry: { kind: 'planar', lattice: 'rectangular', columns: 8, rows: 8, spacingXWavelengths: 0.5 } });
+console.log('\n## Distributed: one-way random phase error e^{-(2πε/λ)²}');
+for (const f of [20, 10, 4]) console.log(`  ε = λ/${f}: ${dB(Math.exp(-(((2 * Math.PI) / f) ** 2)))} dB`);
