@@ -40,7 +40,15 @@ export interface NumberParamSpec {
   optional?: boolean;
   /** Length given in wavelengths ("0.5 λ") is allowed; names the input whose wavelength is meant. */
   wavelengthFrom?: 'design' | 'highest';
+  /** Used only when a choice field has one of these values (the frame says "Not used" otherwise). */
+  usedWhen?: UsedWhen;
   description: string;
+}
+
+/** The choice field (by URL key) and its values under which a parameter is read by compute. */
+export interface UsedWhen {
+  key: string;
+  values: string[];
 }
 
 export interface ChoiceParamSpec {
@@ -50,6 +58,7 @@ export interface ChoiceParamSpec {
   label: string;
   options: { value: string; label: string }[];
   defaultText: string;
+  usedWhen?: UsedWhen;
   description: string;
 }
 

@@ -39,6 +39,8 @@ function calculator(id: string, query: string) {
 console.log('## Reflectors');
 calculator('front-fed-reflector', '?v=1&f=8.2GHz&solve=gain&d=3.7m&fd=0.38&feed=taper&et=-11dB&rms=0.6mm&blk=28cm&strut=0.025&loss=0.4dB&offby=length&off=0cm&n=1');
 
+calculator('scan-loss', '?v=1&f=10GHz&d=0.6lambda&lat=triangular&by=width&w=0.4m&scan=60deg&el=cosine&nexp=1.3&eta=0.8');
+
 console.log('\n## End-fire (12 elements, 0.25 λ)');
 for (const [name, step] of [['ordinary', ordinaryEndFirePhaseStepRad(0.25)], ['Hansen–Woodyard', hansenWoodyardPhaseStepRad(12, 0.25)]] as const) {
   show(`${name} end-fire, step ${((step * 180) / Math.PI).toFixed(1)}°`, { geometry: { kind: 'linear', count: 12, spacingWavelengths: 0.25 }, phaseStepRad: step, beam: { thetaDeg: 90, phiDeg: 0 } });

@@ -11,6 +11,21 @@ export const calculators: NavEntry[] = [
     title: 'Wavelength & element spacing',
     summary: 'Wavelengths over a band, the grating-lobe-free spacing for a lattice and scan range, and the element count of an aperture.',
   },
+  {
+    path: 'calculators/front-fed-reflector/',
+    title: 'Front-fed parabolic reflector',
+    summary: 'Gain or diameter from an efficiency budget (spillover, taper, surface, blockage), the far-field pattern, the best edge taper, and beam steering by feed offset.',
+  },
+  {
+    path: 'calculators/scan-loss/',
+    title: 'Scan-loss estimate',
+    summary: 'Gain lost at the scan edge — projected aperture, element factor, mismatch — beam broadening, grating-lobe onset, and the aperture growth a gain target needs.',
+  },
+  {
+    path: 'calculators/range-exposure/',
+    title: 'Link range & RF exposure',
+    summary: 'Friis range or the gain a range needs, free-space loss (ITU-R P.525), EIRP, power density and the distance to an exposure limit.',
+  },
 ];
 
 export const docs: NavEntry[] = [

@@ -66,6 +66,8 @@ export interface BudgetRow {
   label: string;
   /** Linear factor, 0…1. */
   efficiency: number;
+  /** The same factor in per cent (100 × efficiency). */
+  percent: number;
   /** 10·log10 of the factor (≤ 0). */
   decibels: number;
 }
@@ -81,6 +83,10 @@ export interface ClusterBeam {
   feedOffsetM: number;
   /** Beam tilt by Lo's BDF, degrees (opposite sign to the feed offset). */
   beamTiltDeg: number;
+  /** Beam peak by aperture integration, degrees (opposite sign to the feed offset). */
+  beamPeakDeg: number;
+  /** Peak gain lost to coma relative to the on-axis feed, dB (≥ 0). */
+  scanLossDb: number;
 }
 
 export interface ReflectorData {
@@ -92,6 +98,14 @@ export interface ReflectorData {
   beams: ClusterBeam[];
   /** Feed power-pattern exponent q used (cos^q ψ). */
   powerExponent: number;
+  /** Angles off axis of the pattern's landmarks, degrees (null where the aperture is too small to have them). */
+  halfPowerDeg: number | null;
+  firstNullDeg: number | null;
+  firstSidelobeDeg: number | null;
+  /** Level of the first sidelobe relative to the peak, dB (null when it is not in visible space). */
+  firstSidelobeDb: number | null;
+  /** Lowest level the pattern is computed to, dB (values below are floored here). */
+  patternFloorDb: number;
 }
 
 /** Floor of the pattern plot, dB. */
@@ -206,10 +220,21 @@ export function computeReflector(inputs: CalcInputs): CalcResult<ReflectorData> 
   const beamTiltBeamwidths = hpbwDeg === null ? null : beamTiltDeg / hpbwDeg;
   const scan = (offset: number) =>
     displacedFeedBeam({ diameterWavelengths, focalRatio, powerExponent: q, blockedDiameterFraction: innerFraction, offsetWavelengths: offset / lambda });
-  const single = offsetM > 0 ? scan(offsetM) : { peakTiltRad: 0, scanLossDb: 0 };
+  // Feeds at ±δ give mirror-image beams: integrate once per distinct |δ|.
+  const scanCache = new Map<number, { peakTiltRad: number; scanLossDb: number }>();
+  const scanAt = (offset: number) => {
+    const key = Math.abs(offset);
+    let beam = scanCache.get(key);
+    if (!beam) {
+      beam = key > 0 ? scan(key) : { peakTiltRad: 0, scanLossDb: 0 };
+      scanCache.set(key, beam);
+    }
+    return beam;
+  };
+  const single = scanAt(offsetM);
   const isCluster = feedCount > 1;
   const outerOffsetM = ((feedCount - 1) / 2) * offsetM;
-  const outer = isCluster && outerOffsetM > 0 ? scan(outerOffsetM) : null;
+  const outer = isCluster && outerOffsetM > 0 ? scanAt(outerOffsetM) : null;
   const beamSpacingDeg = isCluster ? beamTiltDeg : null;
   let crossoverDb: number | null = null;
   if (isCluster && beamSpacingDeg !== null && offsetM > 0) {
@@ -220,7 +245,13 @@ export function computeReflector(inputs: CalcInputs): CalcResult<ReflectorData> 
   for (let i = 0; i < feedCount; i++) {
     const position = (i - (feedCount - 1) / 2) * offsetM;
     const positionForSingle = feedCount === 1 ? offsetM : position;
-    beams.push({ feedOffsetM: positionForSingle, beamTiltDeg: -bdf * radToDeg(feedOffsetAngleRad(positionForSingle, focalM)) });
+    const beam = steeringAvailable ? scanAt(positionForSingle) : { peakTiltRad: 0, scanLossDb: 0 };
+    beams.push({
+      feedOffsetM: positionForSingle,
+      beamTiltDeg: -bdf * radToDeg(feedOffsetAngleRad(positionForSingle, focalM)),
+      beamPeakDeg: -Math.sign(positionForSingle) * radToDeg(beam.peakTiltRad),
+      scanLossDb: beam.scanLossDb,
+    });
   }
 
   // Measurement and pointing.
@@ -249,10 +280,10 @@ export function computeReflector(inputs: CalcInputs): CalcResult<ReflectorData> 
     warnings.push(warning('large-feed-offset', 'outside-validity', `A beam is steered ${largestTiltBw.toFixed(1)} beamwidths off axis: beyond about ${MAX_OFFSET_BEAMWIDTHS} beamwidths coma grows quickly, Lo's beam deviation factor drifts, and the scan-loss estimate (aperture integration with the feed kept pointed as on axis) becomes rough.`, ['beamTiltDeg', 'scanLossDb', 'outerScanLossDb']));
   }
   if (isCluster && offsetM > 0 && offsetM < lambda) {
-    warnings.push(warning('close-feeds', 'caution', `Feeds ${(offsetM / lambda).toFixed(2)} λ apart cannot be built with this illumination: a feed giving a ${edgeTaperDb(q, psi0).toFixed(0)} dB edge taper is wider than that.`, ['beamSpacingDeg', 'crossoverDb']));
+    warnings.push(warning('close-feeds', 'caution', `Feeds ${(offsetM / lambda).toFixed(2)} λ apart cannot be built with this illumination: a feed giving a ${edgeTaperDb(q, psi0).toFixed(0).replace('-', '−')} dB edge taper is wider than that.`, ['beamSpacingDeg', 'crossoverDb']));
   }
 
-  const row = (key: string, label: string, efficiency: number): BudgetRow => ({ key, label, efficiency, decibels: powerRatioToDb(efficiency) });
+  const row = (key: string, label: string, efficiency: number): BudgetRow => ({ key, label, efficiency, percent: 100 * efficiency, decibels: powerRatioToDb(efficiency) });
   const budget = [
     row('spillover', 'Spillover', illumination.spillover),
     row('taper', 'Taper (illumination)', illumination.taper),
@@ -319,7 +350,17 @@ export function computeReflector(inputs: CalcInputs): CalcResult<ReflectorData> 
       outerScanLossDb: outer ? outer.scanLossDb : isCluster && steeringAvailable ? 0 : null,
     },
     warnings,
-    data: { budget, pattern, beams, powerExponent: q },
+    data: {
+      budget,
+      pattern,
+      beams,
+      powerExponent: q,
+      halfPowerDeg,
+      firstNullDeg,
+      firstSidelobeDeg: firstSidelobeDb === null || figures?.firstSidelobeU == null ? null : uToDeg(figures.firstSidelobeU),
+      firstSidelobeDb,
+      patternFloorDb: PATTERN_FLOOR_DB,
+    },
   };
 }
 
@@ -337,26 +378,26 @@ export function createReflectorCalculator(conventions: TeamConventions): Calcula
     params: [
       { kind: 'frequency', key: 'f', name: 'frequencyHz', label: 'Frequency', defaultText: frequencyDefaultText(conventions.designFrequencyHz), min: 1e6, max: 1e13, minExclusive: true, description: 'Operating frequency.' },
       { kind: 'choice', key: 'solve', name: 'solveFor', label: 'Solve for', options: [ { value: 'gain', label: 'Gain (diameter given)' }, { value: 'diameter', label: 'Diameter (target gain given)' } ], defaultText: 'gain', description: 'Compute the gain of a given dish, or the diameter that reaches a target gain with the same f/D, feed, surface and blockage.' },
-      { kind: 'length', key: 'd', name: 'diameterM', label: 'Diameter D', defaultText: '1.2 m', min: 1e-3, max: 1e3, minExclusive: true, wavelengthFrom: 'design', description: 'Projected aperture diameter; used when solving for gain.' },
-      { kind: 'decibel', key: 'g', name: 'targetGainDbi', label: 'Target gain (dBi)', defaultText: '40 dB', min: -50, max: 120, description: 'Gain over isotropic to reach; used when solving for the diameter.' },
+      { kind: 'length', key: 'd', name: 'diameterM', label: 'Diameter D', defaultText: '1.2 m', min: 1e-3, max: 1e3, minExclusive: true, wavelengthFrom: 'design', usedWhen: { key: 'solve', values: ['gain'] }, description: 'Projected aperture diameter; used when solving for gain.' },
+      { kind: 'decibel', key: 'g', name: 'targetGainDbi', label: 'Target gain (dBi)', defaultText: '40 dB', min: -50, max: 120, usedWhen: { key: 'solve', values: ['diameter'] }, description: 'Gain over isotropic to reach; used when solving for the diameter.' },
       { kind: 'number', key: 'fd', name: 'focalRatio', label: 'Focal ratio f/D', defaultText: '0.4', min: 0.25, max: 100, minExclusive: true, description: 'Focal length over diameter. Front-fed dishes usually have 0.3 to 0.6; at 0.25 the focus lies in the rim plane.' },
       { kind: 'choice', key: 'feed', name: 'feedSpec', label: 'Feed pattern given as', options: [ { value: 'taper', label: 'Edge taper (dB)' }, { value: 'exponent', label: 'Power-pattern exponent q (cos^q ψ)' } ], defaultText: 'taper', description: 'The feed is a rotationally symmetric POWER pattern cos^q ψ; give q, or the edge taper it produces at the rim.' },
-      { kind: 'decibel', key: 'et', name: 'edgeTaperDb', label: 'Edge taper, including space attenuation', defaultText: '-10 dB', min: -200, max: 0, description: 'Aperture power density at the rim relative to the centre (feed fall-off plus space attenuation ((1 + cos ψ0)/2)²); negative.' },
-      { kind: 'number', key: 'q', name: 'powerExponent', label: 'Feed power-pattern exponent q', defaultText: '2', min: 0, max: 1000, description: 'q in the feed power pattern cos^q ψ (the field pattern is cos^(q/2) ψ).' },
+      { kind: 'decibel', key: 'et', name: 'edgeTaperDb', label: 'Edge taper, including space attenuation', defaultText: '-10 dB', min: -200, max: 0, usedWhen: { key: 'feed', values: ['taper'] }, description: 'Aperture power density at the rim relative to the centre (feed fall-off plus space attenuation ((1 + cos ψ0)/2)²); negative.' },
+      { kind: 'number', key: 'q', name: 'powerExponent', label: 'Feed power-pattern exponent q', defaultText: '2', min: 0, max: 1000, usedWhen: { key: 'feed', values: ['exponent'] }, description: 'q in the feed power pattern cos^q ψ (the field pattern is cos^(q/2) ψ).' },
       { kind: 'length', key: 'rms', name: 'rmsSurfaceErrorM', label: 'RMS surface error', defaultText: '0.5 mm', min: 0, max: 10, wavelengthFrom: 'design', description: 'RMS deviation of the surface from the paraboloid, normal to the surface (Ruze equation).' },
       { kind: 'length', key: 'blk', name: 'blockageDiameterM', label: 'Central blockage diameter', defaultText: '10 cm', min: 0, max: 1e3, wavelengthFrom: 'design', description: 'Diameter of the feed (or subreflector) shadow on the aperture; 0 for none. Must be smaller than D.' },
       { kind: 'number', key: 'strut', name: 'strutBlockedFraction', label: 'Strut blockage (fraction of aperture area)', defaultText: '0.03', min: 0, max: 0.9, description: 'Projected area of the feed-support struts over the aperture area.' },
       { kind: 'decibel', key: 'loss', name: 'otherLossDb', label: 'Other losses', defaultText: '0.3 dB', min: 0, max: 100, description: 'Ohmic, mismatch, radome and other losses, as a positive number of dB.' },
       { kind: 'choice', key: 'offby', name: 'offsetSpec', label: 'Feed offset given as', options: [ { value: 'length', label: 'Length in the focal plane' }, { value: 'beamwidths', label: 'Beam tilt in beamwidths' } ], defaultText: 'length', description: 'Give the lateral feed offset as a distance, or as the beam tilt it should produce in half-power beamwidths.' },
-      { kind: 'length', key: 'off', name: 'feedOffsetM', label: 'Lateral feed offset (feed spacing for a cluster)', defaultText: '0 cm', min: 0, max: 1e3, wavelengthFrom: 'design', description: 'Feed displacement from the focus across the axis; with several feeds, the centre-to-centre spacing of neighbours.' },
-      { kind: 'number', key: 'offbw', name: 'beamTiltBeamwidths', label: 'Beam tilt (or beam spacing for a cluster), in beamwidths', defaultText: '1', min: 0, max: 50, description: 'Wanted beam tilt in HPBWs; with several feeds, the spacing of neighbouring beams.' },
+      { kind: 'length', key: 'off', name: 'feedOffsetM', label: 'Lateral feed offset (feed spacing for a cluster)', defaultText: '0 cm', min: 0, max: 1e3, wavelengthFrom: 'design', usedWhen: { key: 'offby', values: ['length'] }, description: 'Feed displacement from the focus across the axis; with several feeds, the centre-to-centre spacing of neighbours.' },
+      { kind: 'number', key: 'offbw', name: 'beamTiltBeamwidths', label: 'Beam tilt (or beam spacing for a cluster), in beamwidths', defaultText: '1', min: 0, max: 50, usedWhen: { key: 'offby', values: ['beamwidths'] }, description: 'Wanted beam tilt in HPBWs; with several feeds, the spacing of neighbouring beams.' },
       { kind: 'count', key: 'n', name: 'feedCount', label: 'Feeds side by side', defaultText: '1', min: 1, max: 99, description: 'Number of feeds in a row across the focal plane, centred on the axis.' },
     ],
     outputs: [
-      { key: 'gainDbi', label: 'Gain', kind: 'decibel', digits: 4, description: '10·log10(η (πD/λ)²), dBi' },
+      { key: 'gainDbi', label: 'Gain', kind: 'decibel', digits: 4, unit: 'dBi', description: '10·log10(η (πD/λ)²), dBi' },
       { key: 'diameterM', label: 'Diameter D', kind: 'length', digits: 4, description: DIAMETER_OUTPUT_NOTE },
       { key: 'wavelengthM', label: 'Wavelength λ', kind: 'length', digits: 5 },
-      { key: 'diameterWavelengths', label: 'Diameter in wavelengths D/λ', kind: 'ratio', digits: 4 },
+      { key: 'diameterWavelengths', label: 'Diameter in wavelengths D/λ', kind: 'ratio', digits: 4, unit: 'λ' },
       { key: 'apertureEfficiencyPercent', label: 'Aperture efficiency η (all factors)', kind: 'percent', digits: 3 },
       { key: 'apertureEfficiencyDb', label: 'Aperture efficiency η', kind: 'decibel', digits: 3 },
       { key: 'spilloverPercent', label: 'Spillover efficiency', kind: 'percent', digits: 4, description: 'Numerical integration over the feed pattern' },
@@ -395,11 +436,11 @@ export function createReflectorCalculator(conventions: TeamConventions): Calcula
       { key: 'feedOffsetM', label: 'Lateral feed offset (or feed spacing)', kind: 'length', digits: 4 },
       { key: 'feedOffsetAngleDeg', label: 'Feed offset angle atan(δ/f)', kind: 'angle', digits: 4 },
       { key: 'beamTiltDeg', label: 'Beam tilt (BDF × offset angle)', kind: 'angle', digits: 4 },
-      { key: 'beamTiltBeamwidths', label: 'Beam tilt in beamwidths', kind: 'ratio', digits: 3 },
+      { key: 'beamTiltBeamwidths', label: 'Beam tilt in beamwidths', kind: 'ratio', digits: 3, unit: 'HPBW' },
       { key: 'beamPeakDeg', label: 'Beam peak by aperture integration', kind: 'angle', digits: 4, description: 'Peak of the displaced-feed pattern with the exact path-length error' },
       { key: 'scanLossDb', label: 'Scan (coma) loss at this offset', kind: 'decibel', digits: 3, description: 'Aperture integration; rough beyond about 3 beamwidths' },
       { key: 'beamSpacingDeg', label: 'Spacing of neighbouring beams', kind: 'angle', digits: 4 },
-      { key: 'beamSpacingBeamwidths', label: 'Beam spacing in beamwidths', kind: 'ratio', digits: 3 },
+      { key: 'beamSpacingBeamwidths', label: 'Beam spacing in beamwidths', kind: 'ratio', digits: 3, unit: 'HPBW' },
       { key: 'crossoverDb', label: 'Crossover level of neighbouring beams', kind: 'decibel', digits: 3, description: 'On-axis pattern at half the beam spacing (coma neglected)' },
       { key: 'outerBeamTiltDeg', label: 'Tilt of the outermost beam', kind: 'angle', digits: 4 },
       { key: 'outerScanLossDb', label: 'Scan loss of the outermost beam', kind: 'decibel', digits: 3 },

@@ -5,6 +5,7 @@
  */
 import type { CalcInputs, CalcResult, CalculatorDef, NumberParamSpec, ParamSpec } from '../../calc/calculator';
 import { freeSpaceWavelengthM } from '../../calc/wavelength';
+import { CalcInputError } from '../../calc/errors';
 import { formatQuantity } from './format';
 import { exampleFor, parseQuantity } from './quantity';
 
@@ -101,8 +102,14 @@ export function validateAll(def: CalculatorDef<unknown>, texts: FieldTexts): { f
   return { fields, inputs };
 }
 
-/** Runs compute, rejecting any non-finite output so NaN and Infinity never reach the page. */
-export function safeCompute<Data>(def: CalculatorDef<Data>, inputs: CalcInputs): { ok: true; result: CalcResult<Data> } | { ok: false; message: string } {
+/**
+ * Runs compute, rejecting any non-finite output so NaN and Infinity never reach the page. A
+ * CalcInputError also reports the parameter it names and its message without that prefix.
+ */
+export function safeCompute<Data>(
+  def: CalculatorDef<Data>,
+  inputs: CalcInputs,
+): { ok: true; result: CalcResult<Data> } | { ok: false; message: string; parameter?: string; detail?: string } {
   try {
     const result = def.compute(inputs);
     for (const [key, value] of Object.entries(result.values)) {
@@ -113,6 +120,11 @@ export function safeCompute<Data>(def: CalculatorDef<Data>, inputs: CalcInputs):
     return { ok: true, result };
   } catch (error) {
     const message = error instanceof Error ? error.message : String(error);
+    if (error instanceof CalcInputError) {
+      const prefix = `${error.parameter}: `;
+      const detail = message.startsWith(prefix) ? message.slice(prefix.length) : message;
+      return { ok: false, message: `Cannot compute with these inputs: ${message}`, parameter: error.parameter, detail };
+    }
     return { ok: false, message: `Cannot compute with these inputs: ${message}` };
   }
 }
@@ -125,6 +137,27 @@ export function evaluate<Data>(def: CalculatorDef<Data>, texts: FieldTexts, prev
   const { fields, inputs } = validateAll(def as CalculatorDef<unknown>, texts);
   if (!inputs) return { fields, result: previous, stale: true, error: null };
   const computed = safeCompute(def, inputs);
-  if (!computed.ok) return { fields, result: previous, stale: true, error: computed.message };
+  if (!computed.ok) {
+    // Every field passed on its own, but calc/ rejects the combination: when it names one of the
+    // inputs, mark that field with the reason (e.g. a blockage wider than the dish).
+    const spec = computed.parameter ? def.params.find((p) => p.name === computed.parameter) : undefined;
+    if (!spec || !computed.detail) return { fields, result: previous, stale: true, error: computed.message };
+    const message = `Not possible with the other inputs: ${computed.detail}.`;
+    return { fields: { ...fields, [spec.key]: { ok: false, message } }, result: previous, stale: true, error: `${spec.label}: ${computed.detail}.` };
+  }
   return { fields, result: computed.result, stale: false, error: null };
+}
+
+/**
+ * Why a field is not read with the current choices (its spec's `usedWhen`), e.g.
+ * 'Solve for is “Gain (diameter given)”'; null when it is used. Fields keep their text and are
+ * still validated, so a link restores them and switching the choice back needs no retyping.
+ */
+export function unusedReason(def: CalculatorDef<unknown>, spec: ParamSpec, texts: FieldTexts): string | null {
+  if (!spec.usedWhen) return null;
+  const choice = def.params.find((p) => p.key === spec.usedWhen!.key);
+  const current = (texts[spec.usedWhen.key] ?? '').trim();
+  if (!choice || choice.kind !== 'choice' || spec.usedWhen.values.includes(current)) return null;
+  const option = choice.options.find((o) => o.value === current);
+  return option ? `${choice.label} is “${option.label}”` : null;
 }

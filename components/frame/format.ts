@@ -10,18 +10,31 @@ export interface Formatted {
   unit: string;
 }
 
-/** Rounds to `digits` significant digits and drops trailing zeros; plain notation for 1e-4…1e9. */
+/**
+ * Rounds to `digits` significant digits and drops trailing zeros; plain notation for 1e-4…1e9.
+ * Negative numbers get a true minus sign (U+2212), as in decibels and plot ticks.
+ */
 export function formatSignificant(value: number, digits: number): string {
   if (!Number.isFinite(value)) return '—';
   if (value === 0) return '0';
+  if (value < 0) return `−${formatSignificant(-value, digits)}`;
   const magnitude = Math.abs(value);
   if (magnitude >= 1e9 || magnitude < 1e-4) {
     const [mantissa, exponent] = value.toExponential(Math.max(0, digits - 1)).split('e');
-    return `${trimZeros(mantissa)}×10^${Number(exponent)}`;
+    return `${trimZeros(mantissa)}×10${toSuperscript(Number(exponent))}`;
   }
   const rounded = Number(value.toPrecision(Math.max(1, digits)));
   const decimals = Math.max(0, digits - 1 - Math.floor(Math.log10(Math.abs(rounded) || 1)));
   return trimZeros(rounded.toFixed(Math.min(decimals, 12)));
+}
+
+const SUPERSCRIPT: Record<string, string> = { '-': '⁻', '0': '⁰', '1': '¹', '2': '²', '3': '³', '4': '⁴', '5': '⁵', '6': '⁶', '7': '⁷', '8': '⁸', '9': '⁹' };
+
+function toSuperscript(exponent: number): string {
+  return String(exponent)
+    .split('')
+    .map((c) => SUPERSCRIPT[c] ?? c)
+    .join('');
 }
 
 function trimZeros(text: string): string {
@@ -71,7 +84,7 @@ export function formatQuantity(value: number, kind: QuantityKind | 'percent' | '
     case 'decibel':
       return { text: formatFixedDb(value), unit: unitOverride ?? 'dB' };
     case 'power': {
-      if (unitOverride === 'dBm') return { text: formatFixedDb(10 * Math.log10(value) + 30), unit: 'dBm' };
+      if (unitOverride === 'dBm' || (value > 0 && value < 1e-6)) return { text: formatFixedDb(10 * Math.log10(value) + 30), unit: 'dBm' };
       if (Math.abs(value) >= 1e3) return { text: formatSignificant(value / 1e3, digits), unit: 'kW' };
       if (Math.abs(value) >= 1 || value === 0) return { text: formatSignificant(value, digits), unit: 'W' };
       if (Math.abs(value) >= 1e-3) return { text: formatSignificant(value * 1e3, digits), unit: 'mW' };

@@ -50,7 +50,7 @@ function extent(values: number[]): [number, number] {
 /** Prepares scales, ticks and paths. Domains default to the data extent (y padded by 5 %). */
 export function prepareLinePlot(
   series: PlotSeries[],
-  options: { xDomain?: [number, number]; yDomain?: [number, number]; xLog?: boolean; frame?: PlotFrame; xTickFormat?: (v: number) => string; yTickFormat?: (v: number) => string } = {},
+  options: { xDomain?: [number, number]; yDomain?: [number, number]; xLog?: boolean; yLog?: boolean; frame?: PlotFrame; xTickFormat?: (v: number) => string; yTickFormat?: (v: number) => string } = {},
 ): PreparedPlot {
   const frame = options.frame ?? DEFAULT_FRAME;
   const inner = {
@@ -63,29 +63,42 @@ export function prepareLinePlot(
   const ys = series.flatMap((s) => s.points.map((p) => p.y));
   const xDomain = options.xDomain ?? extent(xs);
   let yDomain = options.yDomain;
+  const yLog = options.yLog === true;
   if (!yDomain) {
-    const [lo, hi] = extent(ys);
+    const [lo, hi] = extent(yLog ? ys.filter((y) => y > 0) : ys);
     const pad = (hi - lo) * 0.05;
-    yDomain = [lo - pad, hi + pad];
+    yDomain = yLog ? [lo, hi] : [lo - pad, hi + pad];
   }
   const xScale = options.xLog && xDomain[0] > 0
     ? scaleLog().domain(xDomain).range([inner.left, inner.right])
     : scaleLinear().domain(xDomain).range([inner.left, inner.right]);
-  const yScale = scaleLinear().domain(yDomain).range([inner.bottom, inner.top]).nice(6);
-  const fmtX = options.xTickFormat ?? xScale.tickFormat(7);
-  const fmtY = options.yTickFormat ?? yScale.tickFormat(6);
+  const yScale = yLog && yDomain[0] > 0
+    ? scaleLog().domain(yDomain).range([inner.bottom, inner.top]).nice()
+    : scaleLinear().domain(yDomain).range([inner.bottom, inner.top]).nice(6);
+  const fmtX = options.xTickFormat ?? xScale.tickFormat(7, options.xLog ? '~g' : undefined);
+  const fmtY = options.yTickFormat ?? yScale.tickFormat(6, yLog ? '~g' : undefined);
   const [yLo, yHi] = yScale.domain();
   const clampY = (v: number) => Math.min(Math.max(v, Math.min(yLo, yHi)), Math.max(yLo, yHi));
   const pathOf = line<PlotPoint>()
-    .defined((p) => Number.isFinite(p.x) && Number.isFinite(p.y))
+    .defined((p) => Number.isFinite(p.x) && Number.isFinite(p.y) && (!yLog || p.y > 0) && (!options.xLog || p.x > 0))
     .x((p) => xScale(p.x))
     .y((p) => yScale(clampY(p.y)));
   return {
-    xTicks: xScale.ticks(7).map((value) => ({ value, position: xScale(value), label: fmtX(value) })),
-    yTicks: yScale.ticks(6).map((value) => ({ value, position: yScale(value), label: fmtY(value) })),
+    xTicks: (options.xLog ? thinLogTicks(xScale.ticks()) : xScale.ticks(7)).map((value) => ({ value, position: xScale(value), label: fmtX(value) })),
+    yTicks: (yLog ? thinLogTicks(yScale.ticks()) : yScale.ticks(6)).map((value) => ({ value, position: yScale(value), label: fmtY(value) })),
     paths: series.map((s) => ({ id: s.id, label: s.label, d: pathOf(s.points.filter((p) => p.x >= Math.min(...xDomain) && p.x <= Math.max(...xDomain))) ?? '' })),
     x: (v) => xScale(v),
     y: (v) => yScale(clampY(v)),
     inner,
   };
+}
+
+/** Keeps the decade ticks (1, 10, 100…) and, when few, the 2 and 5 ticks of a log axis. */
+function thinLogTicks(ticks: number[]): number[] {
+  const decades = ticks.filter((t) => Math.abs(Math.log10(t) - Math.round(Math.log10(t))) < 1e-9);
+  if (decades.length >= 3) return decades;
+  return ticks.filter((t) => {
+    const m = t / 10 ** Math.floor(Math.log10(t) + 1e-9);
+    return [1, 2, 5].some((k) => Math.abs(m - k) < 1e-6);
+  });
 }

@@ -68,7 +68,7 @@ export const glossary: GlossaryTerm[] = [
     aka: ['HPBW', '3 dB beamwidth'],
     definition: 'The full angle between the two directions, in a named plane through the main-beam peak, where the radiation intensity is half the peak (−3 dB). Dirigo finds the −3 dB points by root-finding, not by reading a grid.',
     ieee145: true,
-    calculators: ['front-fed-reflector'],
+    calculators: ['front-fed-reflector', 'scan-loss'],
     see: [guide('steering', 'Guide: steering')],
   },
   {
@@ -132,13 +132,14 @@ export const glossary: GlossaryTerm[] = [
     term: 'Mutual coupling',
     definition: 'The interaction between elements: current on one element induces current on its neighbours, so each element\'s impedance and pattern depend on the others and on the scan angle. Strong below about λ/4 spacing.',
     ieee145: false,
-    calculators: ['wavelength-spacing'],
+    calculators: ['wavelength-spacing', 'scan-loss'],
     see: [guide('broadside-arrays', 'Guide: broadside arrays')],
   },
   {
     id: 'scan-loss',
     term: 'Scan loss',
     definition: 'The drop in gain of a phased array as its beam is steered away from broadside: at least the projected-area factor cos θ₀, more with real element patterns and mismatch. Our default model is cosⁿθ₀ with n = 1.3.',
+    calculators: ['scan-loss'],
     ieee145: false,
     see: [guide('steering', 'Guide: steering'), { path: 'conventions/', label: 'Conventions' }],
   },
@@ -236,7 +237,7 @@ export const glossary: GlossaryTerm[] = [
     aka: ['far-field region', 'Fraunhofer region'],
     definition: 'The region where the angular distribution of the field no longer depends on distance and power density falls as 1/r². Conventionally beyond 2D²/λ for an aperture of largest dimension D; pattern measurements and far-field exposure formulas need it.',
     ieee145: true,
-    calculators: ['front-fed-reflector'],
+    calculators: ['front-fed-reflector', 'range-exposure'],
     see: [guide('reflectors', 'Guide: reflectors')],
   },
   {
@@ -244,6 +245,7 @@ export const glossary: GlossaryTerm[] = [
     term: 'EIRP',
     aka: ['equivalent isotropically radiated power'],
     definition: 'Transmitter power delivered to the antenna times the antenna gain in a given direction: the power an isotropic source would need for the same intensity. In dBW or dBm: P + G.',
+    calculators: ['range-exposure'],
     ieee145: true,
   },
   {

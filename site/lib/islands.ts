@@ -5,6 +5,9 @@
  */
 import type { Component } from 'svelte';
 import WavelengthSpacing from '../../components/calculators/WavelengthSpacing.svelte';
+import FrontFedReflector from '../../components/calculators/FrontFedReflector.svelte';
+import ScanLoss from '../../components/calculators/ScanLoss.svelte';
+import RangeExposure from '../../components/calculators/RangeExposure.svelte';
 
 /** Props every calculator island accepts. */
 export interface IslandProps {
@@ -16,4 +19,8 @@ export interface IslandProps {
 
 export const calculatorIslands: Record<string, Component<IslandProps>> = {
   'wavelength-spacing': WavelengthSpacing,
+  'front-fed-reflector': FrontFedReflector,
+  'scan-loss': ScanLoss,
+  'range-exposure': RangeExposure,
 };
+

@@ -58,7 +58,9 @@ export async function waitForCalculator(page: Page, id: string): Promise<void> {
 /** Text of one output row's value and unit. */
 export async function outputText(page: Page, key: string): Promise<string> {
   const row = page.locator(`[data-output="${key}"]`).first();
-  return (await row.locator('td').allInnerTexts()).join(' ').replace(/\s+/g, ' ').trim();
+  const value = await row.locator('output').innerText();
+  const unit = await row.locator('.result-unit').innerText();
+  return `${value} ${unit}`.replace(/\s+/g, ' ').trim();
 }
 
 /** Replaces a field's text as a user would (select all, type). */

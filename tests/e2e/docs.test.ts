@@ -4,6 +4,7 @@ import { launch, openPage, outputText, siteUrl, waitForCalculator } from './brow
 import { formulaCatalog } from '../../calc/formulaCatalog';
 import { referenceGroups } from '../reference/index';
 import { calculators, docs } from '../../site/nav';
+import { calculatorCautions } from '../../site/lib/cautions';
 
 let browser: Browser;
 beforeAll(async () => {
@@ -122,6 +123,23 @@ describe('embedding', () => {
     expect(target.pathname).toBe('/rf/calculators/wavelength-spacing/');
     expect(target.searchParams.get('f')).toBe('9GHz');
     expect(target.searchParams.get('d')).toBe('0.6lambda');
+    expect(outside).toEqual([]);
+    expect(errors).toEqual([]);
+    await context.close();
+  });
+
+  it('every published calculator has a bare embed route that hydrates offline and keeps its safety note', async () => {
+    const { page, outside, errors, context } = await openPage(browser);
+    for (const c of calculators) {
+      const id = c.path.replace(/^calculators\/|\/$/g, '');
+      const response = await page.goto(siteUrl(`embed/${id}/`));
+      expect(response?.status(), id).toBe(200);
+      await waitForCalculator(page, id);
+      expect(await page.locator('.site-nav').count(), id).toBe(0);
+      const safety = page.locator('.safety');
+      if (calculatorCautions[id]) expect(await safety.innerText(), id).toContain(calculatorCautions[id]);
+      else expect(await safety.count(), id).toBe(0);
+    }
     expect(outside).toEqual([]);
     expect(errors).toEqual([]);
     await context.close();

@@ -1,6 +1,8 @@
 import { describe, expect, it } from 'vitest';
-import { defaultTexts, evaluate, safeCompute, validateField } from '../../components/frame/calculatorModel';
+import { defaultTexts, evaluate, safeCompute, unusedReason, validateField } from '../../components/frame/calculatorModel';
 import { createWavelengthSpacingCalculator } from '../../calc/calculators/wavelengthSpacing';
+import { createReflectorCalculator } from '../../calc/calculators/reflector';
+import { calculatorFactories } from '../../calc/calculators/index';
 import { teamConventions } from '../../site/conventions';
 import type { CalculatorDef } from '../../calc/calculator';
 
@@ -29,6 +31,17 @@ describe('evaluate: last good result stays visible, marked stale', () => {
     const ev = evaluate(def, { ...defaultTexts(def), f: '8 GHz', fhi: '12 GHz', d: '0.5 λ' }, null);
     expect(ev.result!.values.chosenWavelengths).toBeCloseTo(0.5, 12);
   });
+  it('a CalcInputError naming an input marks that field with the reason, keeps the last good result and says it in the banner', () => {
+    const reflector = createReflectorCalculator(teamConventions);
+    const good = evaluate(reflector, defaultTexts(reflector), null);
+    const bad = evaluate(reflector, { ...defaultTexts(reflector), d: '1.2 m', blk: '1.5 m' }, good.result);
+    expect(bad.stale).toBe(true);
+    expect(bad.result).toBe(good.result);
+    expect(bad.fields.blk.ok).toBe(false);
+    expect(!bad.fields.blk.ok && bad.fields.blk.message).toMatch(/^Not possible with the other inputs: expected a blockage diameter smaller than the dish diameter 1\.2 m, got 1\.5 m\.$/);
+    expect(bad.fields.d.ok).toBe(true);
+    expect(bad.error).toMatch(/^Central blockage diameter: expected a blockage diameter smaller/);
+  });
   it('a compute that throws or returns a non-finite value is caught, never shown', () => {
     const throwing = { ...def, compute: () => { throw new Error('boom'); } } as CalculatorDef<unknown>;
     expect(safeCompute(throwing, {})).toEqual({ ok: false, message: 'Cannot compute with these inputs: boom' });
@@ -53,5 +66,30 @@ describe('wavelength & spacing results (values checked by hand)', () => {
   it('element counts: triangular saves ≈13.4 % at each lattice’s own limit (Sharp 1961)', () => {
     const ev = evaluate(def, { ...defaultTexts(def), w: '2 m', h: '2 m' }, null);
     expect(ev.result!.values.savingPercent).toBeCloseTo(100 * (1 - Math.sqrt(3) / 2), 0);
+  });
+});
+
+describe('unusedReason: fields the current choices leave unread', () => {
+  const reflector = createReflectorCalculator(teamConventions);
+  const spec = (key: string) => reflector.params.find((p) => p.key === key)!;
+  it('names the choice and its shown option; null when the field is used or has no usedWhen', () => {
+    const texts = defaultTexts(reflector);
+    expect(unusedReason(reflector, spec('g'), texts)).toBe('Solve for is “Gain (diameter given)”');
+    expect(unusedReason(reflector, spec('d'), texts)).toBeNull();
+    expect(unusedReason(reflector, spec('d'), { ...texts, solve: 'diameter' })).toBe('Solve for is “Diameter (target gain given)”');
+    expect(unusedReason(reflector, spec('f'), texts)).toBeNull();
+  });
+  it('an invalid choice text gives no reason (the choice field carries the error)', () => {
+    expect(unusedReason(reflector, spec('g'), { ...defaultTexts(reflector), solve: 'both' })).toBeNull();
+  });
+  it('every usedWhen of every registered calculator names a choice field and values it offers', () => {
+    for (const make of Object.values(calculatorFactories)) {
+      const d = make(teamConventions);
+      for (const p of d.params.filter((x) => x.usedWhen)) {
+        const choice = d.params.find((x) => x.key === p.usedWhen!.key);
+        expect(choice?.kind, `${d.id}.${p.key}`).toBe('choice');
+        if (choice?.kind === 'choice') for (const v of p.usedWhen!.values) expect(choice.options.map((o) => o.value), `${d.id}.${p.key}`).toContain(v);
+      }
+    }
   });
 });

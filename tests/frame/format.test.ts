@@ -28,8 +28,10 @@ describe('formatQuantity picks a unit that reads well', () => {
     expect(formatQuantity(0.0299792458, 'length', 5)).toEqual({ text: '2.9979', unit: 'cm' });
     expect(formatQuantity(0.0012, 'length', 3)).toEqual({ text: '1.2', unit: 'mm' });
   });
-  it('decibels with two decimals and a real minus sign', () => {
+  it('decibels with two decimals; a real minus sign on every negative quantity', () => {
     expect(formatQuantity(-13.2623, 'decibel', 4)).toEqual({ text: '−13.26', unit: 'dB' });
+    expect(formatQuantity(-0.034738, 'length', 4)).toEqual({ text: '−3.474', unit: 'cm' });
+    expect(formatQuantity(-0.9393, 'angle', 4)).toEqual({ text: '−0.9393', unit: '°' });
     expect(formatQuantity(35.2, 'decibel', 4, 'dBi')).toEqual({ text: '35.20', unit: 'dBi' });
   });
   it('counts with thin-space grouping', () => {
@@ -42,5 +44,12 @@ describe('canonicalToFieldText', () => {
     expect(canonicalToFieldText('10GHz')).toBe('10 GHz');
     expect(canonicalToFieldText('0.5lambda')).toBe('0.5 λ');
     expect(canonicalToFieldText('triangular')).toBe('triangular');
+  });
+});
+
+describe('scientific notation', () => {
+  it('uses a superscript exponent for very small and very large values', () => {
+    expect(formatSignificant(1.99e-6, 3)).toBe('1.99×10⁻⁶');
+    expect(formatSignificant(2.5e12, 2)).toBe('2.5×10¹²');
   });
 });

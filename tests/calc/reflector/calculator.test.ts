@@ -85,6 +85,44 @@ describe('reflector calculator definition', () => {
     expect(v.crossoverDb as number).toBeCloseTo(-3.0103, 4);
     expect((v.outerBeamTiltDeg as number) / (v.beamSpacingDeg as number)).toBeCloseTo(1.5, 2); // 1.5 feed spacings out; atan makes it slightly less
   });
+  it('data.beams gives each feed of a cluster its BDF tilt, integrated peak and scan loss: mirror pairs agree, the outer feeds match the outer-beam outputs, the centre feed has no loss', () => {
+    const r = def.compute({ ...defaults(), offsetSpec: 'beamwidths', beamTiltBeamwidths: 1.2, feedCount: 5 });
+    const v = r.values as Record<string, number>;
+    const b = r.data.beams;
+    expect(b.map((x) => x.feedOffsetM / v.feedOffsetM)).toEqual([-2, -1, 0, 1, 2].map((k) => expect.closeTo(k, 12)));
+    expect(b[2].scanLossDb).toBe(0);
+    expect(Math.abs(b[2].beamPeakDeg)).toBe(0);
+    expect(b[0].scanLossDb).toBe(b[4].scanLossDb);
+    expect(b[0].beamPeakDeg).toBeCloseTo(-b[4].beamPeakDeg, 12);
+    expect(b[4].scanLossDb).toBe(v.outerScanLossDb);
+    expect(-b[4].beamTiltDeg).toBeCloseTo(v.outerBeamTiltDeg, 12);
+    expect(b[3].scanLossDb).toBe(v.scanLossDb);
+    expect(-b[3].beamPeakDeg).toBeCloseTo(v.beamPeakDeg, 12);
+    expect(b[4].scanLossDb).toBeGreaterThan(b[3].scanLossDb);
+    // the beam moves to the side opposite the feed
+    expect(b[4].beamPeakDeg).toBeLessThan(0);
+  });
+  it('a single offset feed has one beam with the single-feed outputs', () => {
+    const r = def.compute({ ...defaults(), feedOffsetM: 0.02 });
+    expect(r.data.beams).toHaveLength(1);
+    expect(r.data.beams[0].scanLossDb).toBe(r.values.scanLossDb);
+    expect(-r.data.beams[0].beamPeakDeg).toBeCloseTo(r.values.beamPeakDeg as number, 12);
+  });
+  it('budget rows carry the factor in per cent, and the pattern landmarks sit where the pattern says (−3 dB at half the HPBW, the sidelobe level at its angle; 0.02 dB by linear interpolation on the plotted grid)', () => {
+    const r = def.compute(defaults());
+    for (const row of r.data.budget) expect(row.percent).toBeCloseTo(100 * row.efficiency, 12);
+    const at = (deg: number) => {
+      const p = r.data.pattern;
+      const i = p.findIndex((pt) => pt.thetaDeg >= deg);
+      return p[i - 1].levelDb + ((deg - p[i - 1].thetaDeg) / (p[i].thetaDeg - p[i - 1].thetaDeg)) * (p[i].levelDb - p[i - 1].levelDb);
+    };
+    expect(r.data.halfPowerDeg! * 2).toBeCloseTo(r.values.hpbwDeg as number, 12);
+    expect(Math.abs(at(r.data.halfPowerDeg!) + 3.0103)).toBeLessThan(0.02);
+    expect(r.data.firstSidelobeDb).toBe(r.values.firstSidelobeDb);
+    expect(Math.abs(at(r.data.firstSidelobeDeg!) - r.data.firstSidelobeDb!)).toBeLessThan(0.02);
+    expect(r.data.firstNullDeg!).toBeGreaterThan(r.data.halfPowerDeg!);
+    expect(r.data.firstSidelobeDeg!).toBeGreaterThan(r.data.firstNullDeg!);
+  });
   it('pointing outputs follow the Gaussian-beam rule 12(Δθ/HPBW)² (common practice, no source) and sit near the computed pattern (−1 dB point within 5 %)', () => {
     const r = def.compute(defaults());
     const v = r.values as Record<string, number>;
@@ -102,6 +140,19 @@ describe('reflector calculator definition', () => {
     expect(codes({ focalRatio: 1.5 })).toContain('unusual-focal-ratio');
     expect(codes({ offsetSpec: 'beamwidths', beamTiltBeamwidths: 4 })).toContain('large-feed-offset');
     expect(codes({ blockageDiameterM: 0.4 })).toContain('large-blockage');
+  });
+  it('usedWhen tells the truth: with each choice, the parameters marked unused are not read (NaN there changes nothing)', () => {
+    const choices = def.params.filter((p) => p.kind === 'choice');
+    for (const choice of choices) {
+      if (choice.kind !== 'choice') continue;
+      for (const option of choice.options) {
+        const inputs = { ...defaults(), [choice.name]: option.value, feedCount: 3 };
+        const unused = def.params.filter((p) => p.usedWhen?.key === choice.key && !p.usedWhen.values.includes(option.value));
+        const poisoned = { ...inputs, ...Object.fromEntries(unused.map((p) => [p.name, Number.NaN])) };
+        expect(def.compute(poisoned).values, `${choice.key}=${option.value}`).toEqual(def.compute(inputs).values);
+      }
+    }
+    expect(def.params.filter((p) => p.usedWhen).map((p) => p.key).sort()).toEqual(['d', 'et', 'g', 'off', 'offbw', 'q']);
   });
   it('states the exposure caution once among the assumptions', () => {
     expect(def.assumptions.filter((a) => /exposure/i.test(a)).length).toBe(1);

@@ -1,0 +1,140 @@
+import type { ReferenceGroup } from './referenceCase';
+import { freeSpaceWavelengthM } from '../../calc/wavelength';
+import { ruzeEfficiency } from '../../calc/reflector/ruze';
+import { apertureGainDbi } from '../../calc/reflector/gain';
+import { beamFigures, tabulateAperture } from '../../calc/reflector/aperturePattern';
+import { illuminationEfficiencies, optimumIllumination } from '../../calc/reflector/efficiency';
+import { rimHalfAngleRad } from '../../calc/reflector/geometry';
+import { computeReflector, createReflectorCalculator } from '../../calc/calculators/reflector';
+import type { CalcInputs } from '../../calc/calculator';
+import { teamConventions } from '../../site/conventions';
+import fixture from '../fixtures/reflector-efficiency.json';
+
+const BALANIS_15_4 = 'Balanis, Antenna Theory, 4th ed., Wiley 2016, §15.4.1 (figure of aperture efficiency against ψ0 for cos^n feeds; read from the figure)';
+const BALANIS_12_7 = 'Balanis, Antenna Theory, 4th ed., Wiley 2016, §12.7, circular-aperture figures (table number from memory)';
+const SCIPY = 'SciPy quad, scripts/fixtures/reflector_efficiency.py (tests/fixtures/reflector-efficiency.json)';
+
+const uniform = () => beamFigures(tabulateAperture(() => 1))!;
+const scipyCase = fixture.efficiencies.find((c) => c.focalRatio === 0.4 && c.powerExponent === 2) ?? fixture.efficiencies[0];
+const scipyOptimum = fixture.optimum.find((c) => c.focalRatio === 0.4) ?? fixture.optimum[0];
+
+/** The calculator at its defaults (1.2 m, 10 GHz, f/D 0.4, −10 dB edge taper, 10 cm blockage), as the page opens. */
+function atDefaults(): CalcInputs {
+  const def = createReflectorCalculator(teamConventions);
+  const unit: Record<string, number> = { GHz: 1e9, m: 1, cm: 1e-2, mm: 1e-3, dB: 1, '': 1 };
+  const inputs: CalcInputs = {};
+  for (const p of def.params) {
+    if (p.kind === 'choice') inputs[p.name] = p.defaultText;
+    else {
+      const [, n, u] = /^(-?[\d.]+)\s*([A-Za-z]*)$/.exec(p.defaultText)!;
+      inputs[p.name] = Number(n) * unit[u];
+    }
+  }
+  return inputs;
+}
+
+export const reflectorCases: ReferenceGroup = {
+  topic: 'Front-fed parabolic reflector',
+  modules: ['calc/reflector/ruze.ts', 'calc/reflector/gain.ts', 'calc/reflector/aperturePattern.ts', 'calc/reflector/efficiency.ts', 'calc/calculators/reflector.ts'],
+  cases: [
+    {
+      id: 'ruze-lambda-16',
+      title: 'Ruze surface efficiency at ε = λ/16: exp(−(π/4)²)',
+      source: 'Ruze, "Antenna tolerance theory — a review", Proc. IEEE 54(4), 1966 (hand-worked)',
+      expected: Math.exp(-((Math.PI / 4) ** 2)),
+      tolerance: 1e-12,
+      unit: '',
+      compute: () => ruzeEfficiency(0.03 / 16, 0.03),
+    },
+    {
+      id: 'uniform-hpbw-factor',
+      title: 'Uniform circular aperture: HPBW = 1.029 λ/D radians',
+      source: BALANIS_12_7,
+      expected: 1.029,
+      tolerance: 5e-4,
+      unit: 'rad·D/λ',
+      compute: () => (2 * uniform().halfPowerU) / Math.PI,
+    },
+    {
+      id: 'uniform-first-sidelobe',
+      title: 'Uniform circular aperture: first sidelobe −17.57 dB',
+      source: BALANIS_12_7,
+      expected: -17.57,
+      tolerance: 0.005,
+      unit: 'dB',
+      compute: () => uniform().firstSidelobeDb!,
+    },
+    {
+      id: 'optimum-cos2-efficiency',
+      title: 'cos² ψ feed at its best rim angle (f/D 0.4, ψ0 ≈ 64°): spillover × taper ≈ 0.82',
+      source: BALANIS_15_4,
+      expected: 0.82,
+      tolerance: 0.015,
+      unit: '',
+      compute: () => illuminationEfficiencies(2, rimHalfAngleRad(0.4)).aperture,
+    },
+    {
+      id: 'optimum-edge-taper',
+      title: 'Best edge taper for spillover × taper at f/D 0.5 is about −11 dB',
+      source: BALANIS_15_4,
+      expected: -11,
+      tolerance: 1,
+      unit: 'dB',
+      compute: () => optimumIllumination(rimHalfAngleRad(0.5)).edgeTaperDb,
+    },
+    {
+      id: 'optimum-efficiency',
+      title: 'Best spillover × taper at f/D 0.5 is about 0.82',
+      source: BALANIS_15_4,
+      expected: 0.82,
+      tolerance: 0.015,
+      unit: '',
+      compute: () => optimumIllumination(rimHalfAngleRad(0.5)).efficiency,
+    },
+    {
+      id: 'scipy-spillover-fd04-q2',
+      title: `Spillover, f/D ${scipyCase.focalRatio}, q = ${scipyCase.powerExponent}`,
+      source: SCIPY,
+      expected: scipyCase.spillover,
+      tolerance: 2e-6,
+      unit: '',
+      compute: () => illuminationEfficiencies(scipyCase.powerExponent, rimHalfAngleRad(scipyCase.focalRatio)).spillover,
+    },
+    {
+      id: 'scipy-taper-fd04-q2',
+      title: `Taper efficiency, f/D ${scipyCase.focalRatio}, q = ${scipyCase.powerExponent}`,
+      source: SCIPY,
+      expected: scipyCase.taper,
+      tolerance: 2e-6,
+      unit: '',
+      compute: () => illuminationEfficiencies(scipyCase.powerExponent, rimHalfAngleRad(scipyCase.focalRatio)).taper,
+    },
+    {
+      id: 'scipy-optimum-fd04',
+      title: `Best spillover × taper at f/D ${scipyOptimum.focalRatio} (minimize_scalar)`,
+      source: SCIPY,
+      expected: scipyOptimum.efficiency,
+      tolerance: 1e-6,
+      unit: '',
+      compute: () => optimumIllumination(rimHalfAngleRad(scipyOptimum.focalRatio)).efficiency,
+    },
+    {
+      id: 'gain-3m-10ghz',
+      title: '3 m dish at 10 GHz with η = 0.6: 47.73 dBi',
+      source: 'G = η (πD/λ)², hand-worked: πD/λ = 314.3768, squared × 0.6 = 59 299.6 → 47.7305 dBi (Balanis, Antenna Theory, 4th ed., §15.4)',
+      expected: 47.7305,
+      tolerance: 1e-4,
+      unit: 'dBi',
+      compute: () => apertureGainDbi(0.6, 3, freeSpaceWavelengthM(10e9)),
+    },
+    {
+      id: 'hpbw-70-lambda-over-d',
+      title: 'About −10 dB edge taper: HPBW ≈ 70 λ/D degrees (calculator at its defaults)',
+      source: 'rule of thumb: common practice, no source (±10 %)',
+      expected: 70,
+      tolerance: 7,
+      unit: '°·D/λ',
+      compute: () => computeReflector(atDefaults()).values.hpbwFactorDeg as number,
+    },
+  ],
+};
