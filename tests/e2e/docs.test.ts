@@ -61,6 +61,40 @@ describe('generated docs pages (built HTML)', () => {
   });
 });
 
+describe('guide pages', () => {
+  it('an embedded calculator opens on its worked example, leaves the page URL alone, and links to its own page in that state', async () => {
+    const { page, outside, errors, context } = await openPage(browser);
+    await page.goto(siteUrl('guide/broadside-arrays/'));
+    const calculator = page.locator('[data-calculator="wavelength-spacing"]');
+    await calculator.scrollIntoViewIfNeeded(); // client:visible
+    await waitForCalculator(page, 'wavelength-spacing');
+    expect(await page.locator('#wavelength-spacing-d').inputValue()).toBe('16 mm');
+    expect(await outputText(page, 'countTri')).toMatch(/^1 ?598$/); // harbour panel, as the prose says
+    const stateLink = await page.locator('[data-testid="state-link"]').getAttribute('href');
+    const target = new URL(stateLink!);
+    expect(target.pathname).toBe('/rf/calculators/wavelength-spacing/');
+    expect(target.searchParams.get('d')).toBe('16mm');
+    expect(new URL(page.url()).search).toBe('');
+    const second = await openPage(browser);
+    await second.page.goto(stateLink!);
+    await waitForCalculator(second.page, 'wavelength-spacing');
+    expect(await second.page.locator('#wavelength-spacing-d').inputValue()).toBe('16 mm');
+    expect(await second.page.locator('#wavelength-spacing-w').inputValue()).toBe('1.2 m');
+    await second.context.close();
+    expect(outside).toEqual([]);
+    expect(errors).toEqual([]);
+    await context.close();
+  });
+
+  it('renders its maths at build time and ships no KaTeX JavaScript', async () => {
+    const page = await html('guide/reflectors/');
+    expect(page).toContain('class="katex"');
+    expect(page).not.toMatch(/katex(\.min)?\.js/);
+    const text = page.replace(/<annotation[\s\S]*?<\/annotation>/g, ''); // KaTeX keeps the TeX source there for screen readers
+    expect(text).not.toMatch(/\$\$|\\frac|\\lambda/); // no unrendered TeX left in the page
+  });
+});
+
 describe('offline search', () => {
   // Expected pages: the calculator that treats the term, or the handbook page that explains it
   // until that calculator's page is published.
