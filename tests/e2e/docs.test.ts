@@ -5,6 +5,7 @@ import { formulaCatalog } from '../../calc/formulaCatalog';
 import { referenceGroups } from '../reference/index';
 import { calculators, docs } from '../../site/nav';
 import { calculatorCautions } from '../../site/lib/cautions';
+import { guideSections } from '../../site/guide';
 
 let browser: Browser;
 beforeAll(async () => {
@@ -45,20 +46,24 @@ describe('generated docs pages (built HTML)', () => {
     expect(page).toContain('<h3 id="added">Added</h3>');
   });
 
-  it('every docs and calculator page in the navigation loads offline in both themes without errors', async () => {
-    for (const scheme of ['light', 'dark'] as const) {
+  for (const scheme of ['light', 'dark'] as const) {
+    it(`every docs, guide and calculator page loads offline in the ${scheme} theme without errors`, { timeout: 180_000 }, async () => {
       const { page, outside, errors, context } = await openPage(browser, { colorScheme: scheme });
-      for (const entry of [...docs, ...calculators]) {
-        const response = await page.goto(siteUrl(entry.path));
+      for (const entry of [...docs, ...guideSections]) {
+        const response = await page.goto(siteUrl(entry.path), { waitUntil: 'load' });
         expect(response?.status(), entry.path).toBe(200);
-        await page.waitForLoadState('networkidle');
         expect(await page.locator('h1').count(), entry.path).toBe(1);
+      }
+      for (const entry of calculators) {
+        const response = await page.goto(siteUrl(entry.path), { waitUntil: 'load' });
+        expect(response?.status(), entry.path).toBe(200);
+        await waitForCalculator(page, entry.path.replace(/^calculators\/|\/$/g, '')); // hydration errors would surface here
       }
       expect(outside).toEqual([]);
       expect(errors).toEqual([]);
       await context.close();
-    }
-  });
+    });
+  }
 });
 
 describe('guide pages', () => {
