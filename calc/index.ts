@@ -25,3 +25,8 @@ export * from './exposure/referenceLevels';
 export * from './linkFormulas';
 export * from './scanLoss';
 export * from './scanLossFormulas';
+export * from './sizing/index';
+export * from './endFire/index';
+export * from './endFireFormulas';
+export * from './backplane/index';
+export * from './backplaneFormulas';

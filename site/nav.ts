@@ -7,24 +7,44 @@ export interface NavEntry {
 
 export const calculators: NavEntry[] = [
   {
+    path: 'calculators/architecture-sizing/',
+    title: 'Architecture sizing',
+    summary: 'Every architecture — reflector, end-fire, linear, planar, circular and Y arrays — sized to one gain or beamwidth requirement, side by side, with what rules each out.'
+  },
+  {
     path: 'calculators/wavelength-spacing/',
     title: 'Wavelength & element spacing',
-    summary: 'Wavelengths over a band, the grating-lobe-free spacing for a lattice and scan range, and the element count of an aperture.',
+    summary: 'Wavelengths over a band, the grating-lobe-free spacing for a lattice and scan range, and the element count of an aperture.'
   },
   {
     path: 'calculators/front-fed-reflector/',
     title: 'Front-fed parabolic reflector',
-    summary: 'Gain or diameter from an efficiency budget (spillover, taper, surface, blockage), the far-field pattern, the best edge taper, and beam steering by feed offset.',
+    summary: 'Gain or diameter from an efficiency budget (spillover, taper, surface, blockage), the far-field pattern, the best edge taper, and beam steering by feed offset.'
+  },
+  {
+    path: 'calculators/end-fire-length/',
+    title: 'End-fire length vs gain',
+    summary: 'Length of an ordinary or Hansen–Woodyard end-fire array or a Yagi–Uda for a gain, against a broadside aperture of the same length; stacking Yagis.'
+  },
+  {
+    path: 'calculators/backplane-spacing/',
+    title: 'Backplane spacing',
+    summary: 'Spacing of a conducting plane behind dipoles: the λ/4 rule with a spacer, the image factor over a band and scan range, the flattest spacing, and directivity over the plane.'
+  },
+  {
+    path: 'calculators/array-explorer/',
+    title: 'Array pattern explorer',
+    summary: 'Pattern cut, u–v map, directivity, beamwidths, sidelobes and grating lobes of a steered array, with the element excitation table.'
   },
   {
     path: 'calculators/scan-loss/',
     title: 'Scan-loss estimate',
-    summary: 'Gain lost at the scan edge — projected aperture, element factor, mismatch — beam broadening, grating-lobe onset, and the aperture growth a gain target needs.',
+    summary: 'Gain lost at the scan edge — projected aperture, element factor, mismatch — beam broadening, grating-lobe onset, and the aperture growth a gain target needs.'
   },
   {
     path: 'calculators/range-exposure/',
     title: 'Link range & RF exposure',
-    summary: 'Friis range or the gain a range needs, free-space loss (ITU-R P.525), EIRP, power density and the distance to an exposure limit.',
+    summary: 'Friis range or the gain a range needs, free-space loss (ITU-R P.525), EIRP, power density and the distance to an exposure limit.'
   },
 ];
 

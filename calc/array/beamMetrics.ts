@@ -30,6 +30,8 @@ export interface BeamMetricsOptions {
   direction?: DirectionDeg;
   /** 'forward' (default) looks for sidelobes only in the half space z ≥ 0, where an x–y array's mirror beam is excluded; 'sphere' everywhere. */
   sidelobeRegion?: 'forward' | 'sphere';
+  /** Only HPBW and FNBW: skip the sidelobe search (much faster for large sparse arrays). */
+  beamwidthOnly?: boolean;
 }
 
 type Vector = [number, number, number];
@@ -77,7 +79,7 @@ function walkOutward(at: (t: number) => number, evaluate: (ts: ArrayLike<number>
   return { half };
 }
 
-function planeMetrics(model: ArrayModel, plane: 'theta' | 'phi', u0: Vector, e: Vector, region: 'forward' | 'sphere'): PlaneMetrics {
+function planeMetrics(model: ArrayModel, plane: 'theta' | 'phi', u0: Vector, e: Vector, region: 'forward' | 'sphere', beamwidthOnly = false): PlaneMetrics {
   const evaluate = planeEvaluator(model, u0, e);
   const at = (t: number) => evaluate([t]).power[0];
   const tau = 1 / (arrayDiameterWavelengths(model.positionsWavelengths) + 1);
@@ -96,6 +98,7 @@ function planeMetrics(model: ArrayModel, plane: 'theta' | 'phi', u0: Vector, e: 
   if (right.half !== undefined && left.half !== undefined) result.hpbwDeg = radToDeg(right.half - left.half);
   if (right.null === undefined || left.null === undefined) return result;
   result.fnbwDeg = radToDeg(right.null - left.null);
+  if (beamwidthOnly) return result;
   // Sidelobes: scan the rest of the great circle, refine the largest local maxima.
   const count = Math.min(400_000, Math.ceil((2 * Math.PI) / (tau / 6)));
   const ts = Float64Array.from({ length: count }, (_, i) => right.null! + ((2 * Math.PI - (right.null! - left.null!)) * i) / (count - 1));
@@ -138,8 +141,8 @@ export function principalPlaneMetrics(model: ArrayModel, options: BeamMetricsOpt
   requireInRange('direction.thetaDeg', direction.thetaDeg, 0, 180, '°');
   const [u0, thetaHat, phiHat] = beamFrame(direction);
   const region = options.sidelobeRegion ?? 'forward';
-  const theta = planeMetrics(model, 'theta', u0, thetaHat, region);
-  const phi = planeMetrics(model, 'phi', u0, phiHat, region);
+  const theta = planeMetrics(model, 'theta', u0, thetaHat, region, options.beamwidthOnly);
+  const phi = planeMetrics(model, 'phi', u0, phiHat, region, options.beamwidthOnly);
   const warnings: CalcWarning[] = [];
   for (const m of [theta, phi]) {
     if (m.hpbwDeg === undefined) warnings.push(warning('no-half-power-point', 'note', `The pattern does not fall to half power in the ${m.plane} plane, so its HPBW is undefined.`, [`${m.plane}.hpbwDeg`]));

@@ -8,10 +8,18 @@ import { createWavelengthSpacingCalculator } from './wavelengthSpacing';
 import { createReflectorCalculator } from './reflector';
 import { createRangeExposureCalculator } from './rangeExposure';
 import { createScanLossCalculator } from './scanLoss';
+import { createArchitectureSizingCalculator } from './architectureSizing';
+import { createEndFireLengthCalculator } from './endFireLength';
+import { createBackplaneSpacingCalculator } from './backplaneSpacing';
+import { createArrayExplorerCalculator } from './arrayExplorer';
 
 export const calculatorFactories: Record<string, (conventions: TeamConventions) => CalculatorDef<unknown>> = {
   'wavelength-spacing': createWavelengthSpacingCalculator as (c: TeamConventions) => CalculatorDef<unknown>,
   'front-fed-reflector': createReflectorCalculator as (c: TeamConventions) => CalculatorDef<unknown>,
   'range-exposure': createRangeExposureCalculator as (c: TeamConventions) => CalculatorDef<unknown>,
   'scan-loss': createScanLossCalculator as (c: TeamConventions) => CalculatorDef<unknown>,
+  'architecture-sizing': createArchitectureSizingCalculator as (c: TeamConventions) => CalculatorDef<unknown>,
+  'end-fire-length': createEndFireLengthCalculator as (c: TeamConventions) => CalculatorDef<unknown>,
+  'backplane-spacing': createBackplaneSpacingCalculator as (c: TeamConventions) => CalculatorDef<unknown>,
+  'array-explorer': createArrayExplorerCalculator as (c: TeamConventions) => CalculatorDef<unknown>,
 };

@@ -2,12 +2,23 @@ import { freeSpaceWavelengthM } from '../wavelength';
 import { buildArrayModel } from '../array/buildArray';
 import { directivity } from '../array/directivity';
 import { principalPlaneMetrics } from '../array/beamMetrics';
+import { besselJ0 } from '../numeric/besselJ';
 import type { Candidate, SizingRequirement } from './candidate';
 
-/** Largest ring or Y array the sizing evaluates; beyond it the architecture is flagged as impractical. */
-export const MAX_SPARSE_ELEMENTS = 4096;
+/**
+ * Largest ring or Y array the sizing evaluates with the engine; beyond it the architecture is
+ * flagged as impractical (a filled aperture does better) and sized from the N ≈ D estimate.
+ */
+export const MAX_SPARSE_ELEMENTS = 512;
 
 type SparseKind = 'ring' | 'y';
+
+/**
+ * First sidelobe of a continuous uniformly excited ring, dB: its pattern is J0(ka sin θ), whose
+ * first sidelobe peak sits at the first zero of J1 (x = 3.8317), giving 20·log10|J0(3.8317)|
+ * = −7.9 dB (Balanis, Antenna Theory, 4th ed., §6.10).
+ */
+export const RING_FIRST_SIDELOBE_DB = 20 * Math.log10(Math.abs(besselJ0(3.8317059702075125)));
 
 /** Element spacing along the ring or arms, in wavelengths at the highest frequency. */
 const SPARSE_SPACING_WAVELENGTHS_HIGH = 0.5;
@@ -40,14 +51,17 @@ export function sizeSparseArray(requirement: SizingRequirement, kind: SparseKind
     if (requirement.kind === 'gain') {
       return forwardDirectivityDbi(kind, count, dWl) + 10 * Math.log10(eta) + 10 * Math.log10(Math.cos((Math.min(scan, 89.9) * Math.PI) / 180)) >= requirement.gainEdgeDbi;
     }
-    const m = principalPlaneMetrics(model(kind, count, dWl, 0, 0));
+    const m = principalPlaneMetrics(model(kind, count, dWl, 0, 0), { beamwidthOnly: true });
     const worst = Math.max(m.theta.hpbwDeg ?? Infinity, m.phi.hpbwDeg ?? Infinity);
     return worst <= requirement.hpbwDeg;
   };
+  // A λ/2-spaced ring or Y of isotropic elements has directivity close to N; over a ground plane 2N.
+  const scanFactor = Math.cos((Math.min(scan, 89.9) * Math.PI) / 180);
+  const estimate = requirement.kind === 'gain' ? Math.ceil(10 ** (requirement.gainEdgeDbi / 10) / (2 * eta * scanFactor)) : 0;
   let lo = 2 * step;
   let hi = 4 * step;
-  let capped = false;
-  while (!meets(hi)) {
+  let capped = estimate > MAX_SPARSE_ELEMENTS;
+  while (!capped && !meets(hi)) {
     lo = hi;
     hi *= 2;
     if (hi >= MAX_SPARSE_ELEMENTS) {
@@ -56,7 +70,8 @@ export function sizeSparseArray(requirement: SizingRequirement, kind: SparseKind
       break;
     }
   }
-  if (!capped) {
+  if (capped) return impracticalSparse(requirement, kind, Math.max(estimate, MAX_SPARSE_ELEMENTS), dM, lambdaLow);
+  {
     while (hi - lo > step) {
       const mid = lo + step * Math.floor((hi - lo) / (2 * step));
       if (meets(mid)) hi = mid;
@@ -64,16 +79,14 @@ export function sizeSparseArray(requirement: SizingRequirement, kind: SparseKind
     }
   }
   const count = hi;
-  const broadside = principalPlaneMetrics(model(kind, count, dWl, 0, 0));
-  const edge = scan > 0 ? principalPlaneMetrics(model(kind, count, dWl, Math.min(scan, 89), 0)) : broadside;
-  const edgeAz = scan > 0 ? principalPlaneMetrics(model(kind, count, dWl, Math.min(scan, 89), kind === 'ring' ? 45 : 60)) : broadside;
+  const broadside = principalPlaneMetrics(model(kind, count, dWl, 0, 0), { beamwidthOnly: true });
+  const edge = scan > 0 ? principalPlaneMetrics(model(kind, count, dWl, Math.min(scan, 89), 0), { beamwidthOnly: true }) : broadside;
+  const edgeAz = scan > 0 ? principalPlaneMetrics(model(kind, count, dWl, Math.min(scan, 89), kind === 'ring' ? 45 : 60), { beamwidthOnly: true }) : broadside;
   const gainBroadside = forwardDirectivityDbi(kind, count, dWl) + 10 * Math.log10(eta);
   const gainEdge = gainBroadside + 10 * Math.log10(Math.cos((Math.min(scan, 89.9) * Math.PI) / 180));
   const flags: string[] = [];
-  if (capped) flags.push(`needs more than ${MAX_SPARSE_ELEMENTS} elements: impractical as a ${kind === 'ring' ? 'ring' : 'Y'}; a filled aperture does better`);
-  const sidelobe = broadside.theta.peakSidelobeDb;
   const notes = [
-    `Sparse aperture: peak sidelobe ${sidelobe === undefined ? 'undefined' : `${sidelobe.toFixed(1)} dB`} (uniform excitation); chosen where the beamwidth must stay the same over azimuth.`,
+    `Sparse aperture: the first sidelobe of a uniformly excited ring is about ${RING_FIRST_SIDELOBE_DB.toFixed(1)} dB (Y arrays are similar); chosen where the beamwidth must stay the same over azimuth.`,
     `Scan-edge HPBW at two azimuths: ${edge.theta.hpbwDeg?.toFixed(2) ?? '—'}° and ${edgeAz.theta.hpbwDeg?.toFixed(2) ?? '—'}°.`,
   ];
   if (kind === 'ring') {
@@ -115,4 +128,29 @@ export function sizeSparseArray(requirement: SizingRequirement, kind: SparseKind
     notes,
     outline: { kind: 'y', armM },
   };
+}
+
+/** A ring or Y too large to be sensible: sized from the N ≈ D estimate, flagged, beams not computed. */
+function impracticalSparse(requirement: SizingRequirement, kind: SparseKind, count: number, spacingM: number, lambdaLow: number): Candidate {
+  const eta = requirement.assumptions.arrayRadiationEfficiency;
+  const scan = Math.max(requirement.scanAzimuthDeg, requirement.scanElevationDeg);
+  const gain = 10 * Math.log10(2 * eta * count);
+  const common = {
+    depthM: lambdaLow / 4,
+    spacingM,
+    steering: 'electronic, any azimuth',
+    gainBroadsideDbi: gain,
+    gainEdgeDbi: gain + 10 * Math.log10(Math.cos((Math.min(scan, 89.9) * Math.PI) / 180)),
+    hpbwBroadsideDeg: [null, null] as [null, null],
+    hpbwEdgeDeg: null,
+    flags: [`needs about ${count} elements (more than ${MAX_SPARSE_ELEMENTS}): impractical as a ${kind === 'ring' ? 'ring' : 'Y'}; a filled aperture does better`],
+    notes: ['Sized from the estimate directivity ≈ 2N (λ/2 spacing over a ground plane); beams not computed.'],
+  };
+  if (kind === 'ring') {
+    const diameterM = (count * spacingM) / Math.PI;
+    return { id: 'ringArray', name: 'Uniform circular array', sizeM: diameterM, areaM2: (Math.PI * diameterM * diameterM) / 4, elementCount: count, outline: { kind: 'ring', diameterM }, ...common };
+  }
+  const perArm = Math.ceil(count / 3);
+  const armM = perArm * spacingM;
+  return { id: 'yArray', name: 'Y-shaped array', sizeM: 2 * armM * Math.cos(Math.PI / 6), areaM2: ((3 * Math.sqrt(3)) / 4) * armM * armM, elementCount: 3 * perArm, outline: { kind: 'y', armM }, ...common };
 }

@@ -17,6 +17,7 @@ export function toMarkdown(
   result: CalcResult<unknown> | null,
   link: string,
   stale: boolean,
+  extra = '',
 ): string {
   const lines: string[] = [];
   lines.push(`**${def.title}**${stale ? ' (results are stale: an input is invalid)' : ''}`, '');
@@ -39,6 +40,7 @@ export function toMarkdown(
       for (const w of result.warnings) lines.push(`> ⚠ ${w.message}`);
     }
   }
+  if (extra) lines.push('', extra);
   lines.push('', `[Open in Dirigo](${link})`);
   return lines.join('\n');
 }

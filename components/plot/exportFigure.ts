@@ -23,7 +23,8 @@ function standaloneSvg(svg: SVGSVGElement): string {
   return new XMLSerializer().serializeToString(clone);
 }
 
-function download(blob: Blob, filename: string) {
+/** Downloads a blob as a file (figures, CSV tables). */
+export function downloadBlob(blob: Blob, filename: string) {
   const url = URL.createObjectURL(blob);
   const a = document.createElement('a');
   a.href = url;
@@ -36,7 +37,7 @@ function download(blob: Blob, filename: string) {
 
 /** Downloads the figure as SVG. */
 export function exportSvg(svg: SVGSVGElement, filename: string) {
-  download(new Blob([standaloneSvg(svg)], { type: 'image/svg+xml' }), `${filename}.svg`);
+  downloadBlob(new Blob([standaloneSvg(svg)], { type: 'image/svg+xml' }), `${filename}.svg`);
 }
 
 /** Downloads the figure as PNG at 2× the on-page viewBox size. */
@@ -52,7 +53,7 @@ export function exportPng(svg: SVGSVGElement, filename: string) {
     const context = canvas.getContext('2d');
     if (!context) return;
     context.drawImage(image, 0, 0, canvas.width, canvas.height);
-    canvas.toBlob((blob) => blob && download(blob, `${filename}.png`), 'image/png');
+    canvas.toBlob((blob) => blob && downloadBlob(blob, `${filename}.png`), 'image/png');
   };
   image.src = `data:image/svg+xml;charset=utf-8,${encodeURIComponent(text)}`;
 }

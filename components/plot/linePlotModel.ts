@@ -69,13 +69,14 @@ export function prepareLinePlot(
     const pad = (hi - lo) * 0.05;
     yDomain = yLog ? [lo, hi] : [lo - pad, hi + pad];
   }
-  const xScale = options.xLog && xDomain[0] > 0
+  const isLog = options.xLog === true && xDomain[0] > 0;
+  const xScale = isLog
     ? scaleLog().domain(xDomain).range([inner.left, inner.right])
     : scaleLinear().domain(xDomain).range([inner.left, inner.right]);
   const yScale = yLog && yDomain[0] > 0
     ? scaleLog().domain(yDomain).range([inner.bottom, inner.top]).nice()
     : scaleLinear().domain(yDomain).range([inner.bottom, inner.top]).nice(6);
-  const fmtX = options.xTickFormat ?? xScale.tickFormat(7, options.xLog ? '~g' : undefined);
+  const fmtX = options.xTickFormat ?? xScale.tickFormat(7, isLog ? '~g' : undefined);
   const fmtY = options.yTickFormat ?? yScale.tickFormat(6, yLog ? '~g' : undefined);
   const [yLo, yHi] = yScale.domain();
   const clampY = (v: number) => Math.min(Math.max(v, Math.min(yLo, yHi)), Math.max(yLo, yHi));

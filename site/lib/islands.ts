@@ -8,6 +8,10 @@ import WavelengthSpacing from '../../components/calculators/WavelengthSpacing.sv
 import FrontFedReflector from '../../components/calculators/FrontFedReflector.svelte';
 import ScanLoss from '../../components/calculators/ScanLoss.svelte';
 import RangeExposure from '../../components/calculators/RangeExposure.svelte';
+import ArchitectureSizing from '../../components/calculators/ArchitectureSizing.svelte';
+import EndFireLength from '../../components/calculators/EndFireLength.svelte';
+import BackplaneSpacing from '../../components/calculators/BackplaneSpacing.svelte';
+import ArrayExplorer from '../../components/calculators/ArrayExplorer.svelte';
 
 /** Props every calculator island accepts. */
 export interface IslandProps {
@@ -22,5 +26,9 @@ export const calculatorIslands: Record<string, Component<IslandProps>> = {
   'front-fed-reflector': FrontFedReflector,
   'scan-loss': ScanLoss,
   'range-exposure': RangeExposure,
+  'architecture-sizing': ArchitectureSizing,
+  'end-fire-length': EndFireLength,
+  'backplane-spacing': BackplaneSpacing,
+  'array-explorer': ArrayExplorer,
 };
 

@@ -11,10 +11,11 @@ export const E2E_BASE = '/rf/';
 
 export default async function setup(project: TestProject) {
   if (!process.env.E2E_SKIP_BUILD || !existsSync('dist-e2e/index.html')) {
-    // Vitest sets BASE_URL, MODE, DEV, PROD and SSR in process.env for its own import.meta.env; a child
-    // build that inherits them renders import.meta.env.BASE_URL as '/' and every href() loses the sub-path.
-    const { BASE_URL: _b, MODE: _m, DEV: _d, PROD: _p, SSR: _s, ...env } = process.env;
-    execSync('npx astro build', { stdio: 'inherit', env: { ...env, BASE: E2E_BASE, OUT_DIR: './dist-e2e' } });
+    // Vitest puts Vite's own variables (BASE_URL=/, MODE, DEV, PROD, SSR) into process.env; Astro
+    // would read BASE_URL from there on the server side and drop the sub-path, so leave them out.
+    const env: NodeJS.ProcessEnv = { ...process.env, BASE: E2E_BASE, OUT_DIR: './dist-e2e' };
+    for (const key of ['BASE_URL', 'MODE', 'DEV', 'PROD', 'SSR', 'NODE_ENV']) delete env[key];
+    execSync('npx astro build', { stdio: 'inherit', env });
   }
   const { server, origin } = await startStaticServer('dist-e2e', E2E_BASE);
   project.provide('siteUrl', `${origin}${E2E_BASE}`);

@@ -5,6 +5,7 @@ import { createReflectorCalculator } from '../../calc/calculators/reflector';
 import { calculatorFactories } from '../../calc/calculators/index';
 import { teamConventions } from '../../site/conventions';
 import type { CalculatorDef } from '../../calc/calculator';
+import { CalcInputError } from '../../calc/errors';
 
 const def = createWavelengthSpacingCalculator(teamConventions);
 
@@ -48,6 +49,15 @@ describe('evaluate: last good result stays visible, marked stale', () => {
     const nan = { ...def, compute: () => ({ values: { x: Number.NaN }, warnings: [], data: null }) } as CalculatorDef<unknown>;
     const r = safeCompute(nan, {});
     expect(r.ok).toBe(false);
+  });
+  it('a CalcInputError naming an input (by its calc/ name) is shown at that field, results stale', () => {
+    const good = evaluate(def, defaultTexts(def), null);
+    const rejecting = { ...def, compute: () => { throw new CalcInputError('scanMaxDeg', 'expected less scan for this lattice'); } } as CalculatorDef<unknown>;
+    const ev = evaluate(rejecting, defaultTexts(def), good.result);
+    expect(ev.stale).toBe(true);
+    expect(ev.result).toBe(good.result);
+    expect(ev.error).toBe('Maximum scan angle from broadside: expected less scan for this lattice.');
+    expect(!ev.fields.scan.ok && ev.fields.scan.message).toBe('Not possible with the other inputs: expected less scan for this lattice.');
   });
 });
 

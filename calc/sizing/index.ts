@@ -1,0 +1,8 @@
+/** Requirement-to-architecture sizing: re-exports only. */
+export * from './candidate';
+export * from './reflectorCandidate';
+export * from './planarCandidate';
+export * from './lineCandidate';
+export * from './ringCandidates';
+export * from './endFireCandidate';
+export * from './chooseCandidate';
