@@ -2,6 +2,9 @@
 import { defineConfig } from 'astro/config';
 import svelte from '@astrojs/svelte';
 import mdx from '@astrojs/mdx';
+import { searchIndex } from './scripts/searchIndexIntegration.ts';
+import remarkMath from 'remark-math';
+import rehypeKatex from 'rehype-katex';
 
 const base = process.env.BASE || '/';
 
@@ -12,7 +15,9 @@ export default defineConfig({
   base,
   trailingSlash: 'ignore',
   output: 'static',
-  integrations: [svelte(), mdx()],
+  integrations: [svelte(), mdx(), searchIndex()],
+  // Inline $…$ and display $$…$$ maths in Markdown/MDX, rendered to HTML by KaTeX at build time.
+  markdown: { remarkPlugins: [remarkMath], rehypePlugins: [[rehypeKatex, { output: 'htmlAndMathml', strict: 'ignore' }]] },
   build: { format: 'directory', inlineStylesheets: 'never' },
   devToolbar: { enabled: false },
   prefetch: false,

@@ -20,6 +20,8 @@ export interface CalculatorState<Data> {
   dismissNotices(): void;
   /** Reads the page URL, then keeps it updated (debounced replaceState). Returns a cleanup. */
   connectToUrl(): () => void;
+  /** For a copy not bound to the page URL (e.g. in a guide page): links point at this page instead. */
+  linkTo(pageUrl: string): void;
 }
 
 /** Creates the state, seeded with defaults (so the server-rendered HTML shows default results). */
@@ -60,6 +62,9 @@ export function createCalculatorState<Data>(def: CalculatorDef<Data>, initialQue
     },
     dismissNotices() {
       notices = [];
+    },
+    linkTo(pageUrl: string) {
+      pageBase = pageUrl;
     },
     connectToUrl() {
       pageBase = `${location.origin}${location.pathname}`;

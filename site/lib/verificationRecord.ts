@@ -1,0 +1,68 @@
+/**
+ * Data for the Verification record page: every reference case the test suite runs
+ * (tests/reference/index.ts), with the value the code computes at build time and pass/fail.
+ * Pure, so tests/site/verificationRecord.test.ts checks it lists exactly the cases the tests run.
+ */
+import { runReferenceCase, type ReferenceGroup } from '../../tests/reference/referenceCase';
+
+export interface VerificationRow {
+  id: string;
+  title: string;
+  source: string;
+  expected: number;
+  tolerance: number;
+  unit: string;
+  /** Value computed now; null when the computation threw. */
+  computed: number | null;
+  /** |computed − expected|; null when there is no computed value. */
+  error: number | null;
+  pass: boolean;
+  /** Message when the computation threw. */
+  failure: string | null;
+}
+
+export interface VerificationGroup {
+  topic: string;
+  modules: string[];
+  rows: VerificationRow[];
+}
+
+export interface VerificationRecord {
+  groups: VerificationGroup[];
+  total: number;
+  passed: number;
+}
+
+/** Runs every case of every group (a throwing case is recorded as a failure, not a crash). */
+export function buildVerificationRecord(groups: ReferenceGroup[]): VerificationRecord {
+  const out: VerificationGroup[] = groups.map((g) => ({
+    topic: g.topic,
+    modules: g.modules,
+    rows: g.cases.map((c) => {
+      const base = { id: c.id, title: c.title, source: c.source, expected: c.expected, tolerance: c.tolerance, unit: c.unit };
+      try {
+        const outcome = runReferenceCase(c);
+        return { ...base, computed: outcome.computed, error: Number.isFinite(outcome.error) ? outcome.error : null, pass: outcome.pass, failure: null };
+      } catch (e) {
+        return { ...base, computed: null, error: null, pass: false, failure: e instanceof Error ? e.message : String(e) };
+      }
+    }),
+  }));
+  const rows = out.flatMap((g) => g.rows);
+  return { groups: out, total: rows.length, passed: rows.filter((r) => r.pass).length };
+}
+
+const SUPERSCRIPT: Record<string, string> = { '-': '⁻', '0': '⁰', '1': '¹', '2': '²', '3': '³', '4': '⁴', '5': '⁵', '6': '⁶', '7': '⁷', '8': '⁸', '9': '⁹' };
+
+/** A number for the record: up to 12 significant digits, exponent form for very small or large. */
+export function formatRecordNumber(value: number | null): string {
+  if (value === null || !Number.isFinite(value)) return '—';
+  if (value === 0) return '0';
+  const abs = Math.abs(value);
+  if (abs < 1e-4 || abs >= 1e9) {
+    const [mantissa, exponent] = value.toExponential(3).split('e');
+    const sup = [...String(Number(exponent))].map((ch) => SUPERSCRIPT[ch] ?? ch).join('');
+    return `${Number(mantissa)} × 10${sup}`;
+  }
+  return String(Number(value.toPrecision(12)));
+}

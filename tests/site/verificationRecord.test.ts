@@ -1,0 +1,50 @@
+import { describe, expect, it } from 'vitest';
+import { referenceGroups } from '../reference/index';
+import { buildVerificationRecord, formatRecordNumber } from '../../site/lib/verificationRecord';
+import type { ReferenceGroup } from '../reference/referenceCase';
+
+const record = buildVerificationRecord(referenceGroups);
+
+describe('verification record data (site/lib/verificationRecord.ts)', () => {
+  it('lists exactly the reference cases the test suite runs: same groups, ids, order and count', () => {
+    expect(record.groups.map((g) => g.topic)).toEqual(referenceGroups.map((g) => g.topic));
+    expect(record.groups.map((g) => g.rows.map((r) => r.id))).toEqual(referenceGroups.map((g) => g.cases.map((c) => c.id)));
+    expect(record.total).toBe(referenceGroups.reduce((n, g) => n + g.cases.length, 0));
+  });
+
+  it('carries each case’s source, expected value, tolerance and unit unchanged', () => {
+    const cases = referenceGroups.flatMap((g) => g.cases);
+    const rows = record.groups.flatMap((g) => g.rows);
+    rows.forEach((row, i) => {
+      const c = cases[i];
+      expect([row.title, row.source, row.expected, row.tolerance, row.unit]).toEqual([c.title, c.source, c.expected, c.tolerance, c.unit]);
+      expect(row.computed).toBe(c.compute());
+    });
+  });
+
+  it('records failures honestly: out of tolerance, non-finite and throwing cases fail', () => {
+    const group: ReferenceGroup = {
+      topic: 'made-up failures',
+      modules: [],
+      cases: [
+        { id: 'ok', title: 'ok', source: 'test only', expected: 1, tolerance: 0.1, unit: '', compute: () => 1.05 },
+        { id: 'off', title: 'off', source: 'test only', expected: 1, tolerance: 0.01, unit: '', compute: () => 1.05 },
+        { id: 'nan', title: 'nan', source: 'test only', expected: 1, tolerance: 1, unit: '', compute: () => Number.NaN },
+        { id: 'throws', title: 'throws', source: 'test only', expected: 1, tolerance: 1, unit: '', compute: () => { throw new Error('boom'); } },
+      ],
+    };
+    const r = buildVerificationRecord([group]);
+    expect(r.groups[0].rows.map((row) => row.pass)).toEqual([true, false, false, false]);
+    expect(r.groups[0].rows[3].failure).toBe('boom');
+    expect(r.passed).toBe(1);
+    expect(r.total).toBe(4);
+  });
+
+  it('formats numbers for the record without losing the digits that matter', () => {
+    expect(formatRecordNumber(0.0299792458)).toBe('0.0299792458');
+    expect(formatRecordNumber(1e-15)).toBe('1 × 10⁻¹⁵');
+    expect(formatRecordNumber(2 / 3)).toBe('0.666666666667');
+    expect(formatRecordNumber(null)).toBe('—');
+    expect(formatRecordNumber(0)).toBe('0');
+  });
+});
