@@ -89,35 +89,9 @@ export function sizeSparseArray(requirement: SizingRequirement, kind: SparseKind
     `Sparse aperture: the first sidelobe of a uniformly excited ring is about ${RING_FIRST_SIDELOBE_DB.toFixed(1)} dB (Y arrays are similar); chosen where the beamwidth must stay the same over azimuth.`,
     `Scan-edge HPBW at two azimuths: ${edge.theta.hpbwDeg?.toFixed(2) ?? '—'}° and ${edgeAz.theta.hpbwDeg?.toFixed(2) ?? '—'}°.`,
   ];
-  if (kind === 'ring') {
-    const diameterM = (count * dM) / Math.PI;
-    return {
-      id: 'ringArray',
-      name: 'Uniform circular array',
-      sizeM: diameterM,
-      areaM2: (Math.PI * diameterM * diameterM) / 4,
-      depthM: lambdaLow / 4,
-      elementCount: count,
-      spacingM: dM,
-      steering: scan > 0 ? `electronic, ±${scan}°, any azimuth` : 'electronic, any azimuth',
-      gainBroadsideDbi: gainBroadside,
-      gainEdgeDbi: gainEdge,
-      hpbwBroadsideDeg: [broadside.theta.hpbwDeg ?? null, broadside.phi.hpbwDeg ?? null],
-      hpbwEdgeDeg: edge.theta.hpbwDeg ?? null,
-      flags,
-      notes,
-      outline: { kind: 'ring', diameterM },
-    };
-  }
-  const perArm = Math.max(1, Math.round(count / 3));
-  const armM = perArm * dM;
   return {
-    id: 'yArray',
-    name: 'Y-shaped array',
-    sizeM: 2 * armM * Math.cos(Math.PI / 6),
-    areaM2: (3 * Math.sqrt(3) / 4) * armM * armM,
+    ...sparseShape(kind, count, dM),
     depthM: lambdaLow / 4,
-    elementCount: 3 * perArm,
     spacingM: dM,
     steering: scan > 0 ? `electronic, ±${scan}°, any azimuth` : 'electronic, any azimuth',
     gainBroadsideDbi: gainBroadside,
@@ -126,8 +100,18 @@ export function sizeSparseArray(requirement: SizingRequirement, kind: SparseKind
     hpbwEdgeDeg: edge.theta.hpbwDeg ?? null,
     flags,
     notes,
-    outline: { kind: 'y', armM },
   };
+}
+
+/** Identity, size, area, element count and outline of a ring of `count` elements or a Y of about `count`. */
+function sparseShape(kind: SparseKind, count: number, spacingM: number): Pick<Candidate, 'id' | 'name' | 'sizeM' | 'areaM2' | 'elementCount' | 'outline'> {
+  if (kind === 'ring') {
+    const diameterM = (count * spacingM) / Math.PI;
+    return { id: 'ringArray', name: 'Uniform circular array', sizeM: diameterM, areaM2: (Math.PI * diameterM * diameterM) / 4, elementCount: count, outline: { kind: 'ring', diameterM } };
+  }
+  const perArm = Math.max(1, Math.round(count / 3));
+  const armM = perArm * spacingM;
+  return { id: 'yArray', name: 'Y-shaped array', sizeM: 2 * armM * Math.cos(Math.PI / 6), areaM2: ((3 * Math.sqrt(3)) / 4) * armM * armM, elementCount: 3 * perArm, outline: { kind: 'y', armM } };
 }
 
 /** A ring or Y too large to be sensible: sized from the N ≈ D estimate, flagged, beams not computed. */
@@ -135,22 +119,16 @@ function impracticalSparse(requirement: SizingRequirement, kind: SparseKind, cou
   const eta = requirement.assumptions.arrayRadiationEfficiency;
   const scan = Math.max(requirement.scanAzimuthDeg, requirement.scanElevationDeg);
   const gain = 10 * Math.log10(2 * eta * count);
-  const common = {
+  return {
+    ...sparseShape(kind, kind === 'y' ? 3 * Math.ceil(count / 3) : count, spacingM),
     depthM: lambdaLow / 4,
     spacingM,
     steering: 'electronic, any azimuth',
     gainBroadsideDbi: gain,
     gainEdgeDbi: gain + 10 * Math.log10(Math.cos((Math.min(scan, 89.9) * Math.PI) / 180)),
-    hpbwBroadsideDeg: [null, null] as [null, null],
+    hpbwBroadsideDeg: [null, null],
     hpbwEdgeDeg: null,
     flags: [`needs about ${count} elements (more than ${MAX_SPARSE_ELEMENTS}): impractical as a ${kind === 'ring' ? 'ring' : 'Y'}; a filled aperture does better`],
     notes: ['Sized from the estimate directivity ≈ 2N (λ/2 spacing over a ground plane); beams not computed.'],
   };
-  if (kind === 'ring') {
-    const diameterM = (count * spacingM) / Math.PI;
-    return { id: 'ringArray', name: 'Uniform circular array', sizeM: diameterM, areaM2: (Math.PI * diameterM * diameterM) / 4, elementCount: count, outline: { kind: 'ring', diameterM }, ...common };
-  }
-  const perArm = Math.ceil(count / 3);
-  const armM = perArm * spacingM;
-  return { id: 'yArray', name: 'Y-shaped array', sizeM: 2 * armM * Math.cos(Math.PI / 6), areaM2: ((3 * Math.sqrt(3)) / 4) * armM * armM, elementCount: 3 * perArm, outline: { kind: 'y', armM }, ...common };
 }

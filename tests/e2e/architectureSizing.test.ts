@@ -1,6 +1,6 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Browser } from 'playwright-core';
-import { launch, openPage, outputText, siteUrl, typeInto, waitForCalculator } from './browser';
+import { launch, openPage, outputText, siteUrl, typeInto, waitForCalculator, closeClean } from './browser';
 
 let browser: Browser;
 beforeAll(async () => {
@@ -35,9 +35,7 @@ describe('architecture sizing in Chromium', () => {
     const md = await page.evaluate(() => navigator.clipboard.readText());
     expect(md).toContain('| Architecture | Size |');
     expect(md).toContain('Planar phased array');
-    expect(outside).toEqual([]);
-    expect(errors).toEqual([]);
-    await context.close();
+    await closeClean({ outside, errors, context });
   });
 
   it('follows the link from range to sizing and carries the gain over', async () => {
@@ -55,8 +53,6 @@ describe('architecture sizing in Chromium', () => {
     expect(Math.abs(parseFloat(gainField) - neededDbi)).toBeLessThan(0.006);
     expect(await page.locator('#architecture-sizing-f').inputValue()).toBe('5800000000 Hz');
     expect(await page.locator('[data-testid="link-notices"]').count()).toBe(0);
-    expect(outside).toEqual([]);
-    expect(errors).toEqual([]);
-    await context.close();
+    await closeClean({ outside, errors, context });
   });
 });

@@ -1,6 +1,6 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Browser, Page } from 'playwright-core';
-import { launch, openPage, outputText, siteUrl, typeInto, waitForCalculator } from './browser';
+import { launch, openPage, outputText, siteUrl, typeInto, waitForCalculator, closeClean } from './browser';
 
 const ID = 'array-explorer';
 const PAGE = 'calculators/array-explorer/';
@@ -58,9 +58,7 @@ describe('array pattern explorer in Chromium', () => {
     await expect.poll(async () => Math.abs((await plottedPeakThetaDeg(page)) - 25)).toBeLessThan(0.5);
     await expect.poll(() => page.url(), { timeout: 5000 }).toContain('th=25deg');
     expect(await page.locator('[data-slider="th"]').inputValue()).toBe('25');
-    expect(outside).toEqual([]);
-    expect(errors).toEqual([]);
-    await context.close();
+    await closeClean({ outside, errors, context });
   });
 
   it('a spacing past the limit gives a grating-lobe warning and marks the lobe inside the visible circle of the u–v map', async () => {
@@ -87,9 +85,7 @@ describe('array pattern explorer in Chromium', () => {
     // u0 − λ/d = sin 20° − 1/0.95 = −0.711 (Mailloux, Phased Array Antenna Handbook, 2nd ed., §2.1)
     const rows = await page.locator('[data-testid="grating-lobe-row"]').allInnerTexts();
     expect(rows.some((row) => row.includes('−0.711'))).toBe(true);
-    expect(outside).toEqual([]);
-    expect(errors).toEqual([]);
-    await context.close();
+    await closeClean({ outside, errors, context });
   });
 
   it('a broken link gives notices, falls back field by field, and the page keeps working', async () => {
@@ -110,9 +106,7 @@ describe('array pattern explorer in Chromium', () => {
     await typeInto(page, ID, 'nx', '10');
     await expect.poll(() => outputText(page, 'elementCount')).toBe('80');
     expect(await page.locator('body').innerText()).not.toMatch(/\bNaN\b|Infinity/);
-    expect(outside).toEqual([]);
-    expect(errors).toEqual([]);
-    await context.close();
+    await closeClean({ outside, errors, context });
   });
 
   it('measures the re-render of a 32 × 32 array while the θ0 slider is dragged (reported, not asserted)', async () => {
@@ -199,9 +193,7 @@ describe('array pattern explorer in Chromium', () => {
     // measured longest task, typically 60–270 ms on this 2-core machine, is reported above).
     expect(stats.longest).toBeLessThan(1000);
     expect(stats.frames).toBeGreaterThan(5);
-    expect(outside).toEqual([]);
-    expect(errors).toEqual([]);
-    await context.close();
+    await closeClean({ outside, errors, context });
   });
 
   it('downloads the element CSV with one row per element', async () => {
@@ -242,9 +234,7 @@ describe('array pattern explorer in Chromium', () => {
       await waitForCalculator(page, ID);
       await expect.poll(() => page.locator('.explorer').getAttribute('data-pending'), { timeout: 60_000 }).toBe('');
       await page.waitForLoadState('networkidle');
-      expect(outside).toEqual([]);
-      expect(errors).toEqual([]);
-      await context.close();
+      await closeClean({ outside, errors, context });
     }
   });
 });

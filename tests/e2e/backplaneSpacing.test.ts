@@ -1,6 +1,6 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Browser, Page } from 'playwright-core';
-import { launch, openPage, outputText, siteUrl, typeInto, waitForCalculator } from './browser';
+import { launch, openPage, outputText, siteUrl, typeInto, waitForCalculator, closeClean } from './browser';
 
 const ID = 'backplane-spacing';
 let browser: Browser;
@@ -65,12 +65,8 @@ describe('backplane spacing calculator in Chromium', () => {
     expect(await second.page.locator(`#${ID}-er`).inputValue()).toBe('2.2');
     expect(await outputText(second.page, 'directivityDbi')).toBe(directivity);
     expect(await second.page.locator('[data-testid="link-notices"]').count()).toBe(0);
-    expect(second.outside).toEqual([]);
-    expect(second.errors).toEqual([]);
-    await second.context.close();
+    await closeClean(second);
 
-    expect(outside).toEqual([]);
-    expect(errors).toEqual([]);
-    await context.close();
+    await closeClean({ outside, errors, context });
   });
 });

@@ -71,3 +71,11 @@ export async function typeInto(page: Page, calculatorId: string, key: string, te
   await input.press('Backspace');
   if (text) await input.pressSequentially(text, { delay: 5 });
 }
+
+/** Asserts that nothing left the test server and no page error occurred, then closes the context. */
+export async function closeClean(guarded: Pick<GuardedPage, 'outside' | 'errors' | 'context'>): Promise<void> {
+  const { outside, errors, context } = guarded;
+  await context.close();
+  if (outside.length) throw new Error(`requests left the test server: ${outside.join(', ')}`);
+  if (errors.length) throw new Error(`page errors: ${errors.join(' | ')}`);
+}

@@ -1,6 +1,6 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Browser } from 'playwright-core';
-import { launch, openPage, outputText, siteUrl, waitForCalculator } from './browser';
+import { launch, openPage, outputText, siteUrl, waitForCalculator, closeClean } from './browser';
 import { formulaCatalog } from '../../calc/formulaCatalog';
 import { referenceGroups } from '../reference/index';
 import { calculators, docs } from '../../site/nav';
@@ -59,9 +59,7 @@ describe('generated docs pages (built HTML)', () => {
         expect(response?.status(), entry.path).toBe(200);
         await waitForCalculator(page, entry.path.replace(/^calculators\/|\/$/g, '')); // hydration errors would surface here
       }
-      expect(outside).toEqual([]);
-      expect(errors).toEqual([]);
-      await context.close();
+      await closeClean({ outside, errors, context });
     });
   }
 });
@@ -86,9 +84,7 @@ describe('guide pages', () => {
     expect(await second.page.locator('#wavelength-spacing-d').inputValue()).toBe('16 mm');
     expect(await second.page.locator('#wavelength-spacing-w').inputValue()).toBe('1.2 m');
     await second.context.close();
-    expect(outside).toEqual([]);
-    expect(errors).toEqual([]);
-    await context.close();
+    await closeClean({ outside, errors, context });
   });
 
   it('renders its maths at build time and ships no KaTeX JavaScript', async () => {
@@ -122,9 +118,7 @@ describe('offline search', () => {
       expect(hrefs.slice(0, 5)).toContain(new URL(siteUrl(c.expect)).pathname);
       expect(await page.locator('[data-testid="search-results"] mark').count()).toBeGreaterThan(0);
       expect(page.url()).toContain(`q=${encodeURIComponent(c.term)}`);
-      expect(outside).toEqual([]);
-      expect(errors).toEqual([]);
-      await context.close();
+      await closeClean({ outside, errors, context });
     });
   }
 
@@ -139,9 +133,7 @@ describe('offline search', () => {
     await first.click();
     await page.waitForLoadState('load');
     expect(new URL(page.url()).pathname.startsWith('/rf/')).toBe(true);
-    expect(outside).toEqual([]);
-    expect(errors).toEqual([]);
-    await context.close();
+    await closeClean({ outside, errors, context });
   });
 });
 
@@ -162,9 +154,7 @@ describe('embedding', () => {
     expect(target.pathname).toBe('/rf/calculators/wavelength-spacing/');
     expect(target.searchParams.get('f')).toBe('9GHz');
     expect(target.searchParams.get('d')).toBe('0.6lambda');
-    expect(outside).toEqual([]);
-    expect(errors).toEqual([]);
-    await context.close();
+    await closeClean({ outside, errors, context });
   });
 
   it('every published calculator has a bare embed route that hydrates offline and keeps its safety note', async () => {
@@ -179,9 +169,7 @@ describe('embedding', () => {
       if (calculatorCautions[id]) expect(await safety.innerText(), id).toContain(calculatorCautions[id]);
       else expect(await safety.count(), id).toBe(0);
     }
-    expect(outside).toEqual([]);
-    expect(errors).toEqual([]);
-    await context.close();
+    await closeClean({ outside, errors, context });
   });
 
   it('the calculator page offers embed code that carries the current inputs', async () => {
@@ -200,11 +188,7 @@ describe('embedding', () => {
     await waitForCalculator(frame.page, 'wavelength-spacing');
     expect(await frame.page.locator('#wavelength-spacing-lat').inputValue()).toBe('rectangular');
     expect(await frame.page.locator('#wavelength-spacing-scan').inputValue()).toBe('30 deg');
-    expect(frame.outside).toEqual([]);
-    expect(frame.errors).toEqual([]);
-    await frame.context.close();
-    expect(outside).toEqual([]);
-    expect(errors).toEqual([]);
-    await context.close();
+    await closeClean(frame);
+    await closeClean({ outside, errors, context });
   });
 });

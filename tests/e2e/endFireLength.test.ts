@@ -1,6 +1,6 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Browser, Page } from 'playwright-core';
-import { launch, openPage, outputText, siteUrl, typeInto, waitForCalculator } from './browser';
+import { launch, openPage, outputText, siteUrl, typeInto, waitForCalculator, closeClean } from './browser';
 
 const ID = 'end-fire-length';
 const PLOT = '[data-plot="gain-against-length"]';
@@ -66,13 +66,9 @@ describe('end-fire length calculator in Chromium', () => {
     expect(await second.page.locator(`#${ID}-d`).inputValue()).toBe('0.2 λ');
     expect(await outputText(second.page, 'gainDbi')).toBe(gainHw);
     expect(await second.page.locator('[data-testid="link-notices"]').count()).toBe(0);
-    expect(second.outside).toEqual([]);
-    expect(second.errors).toEqual([]);
-    await second.context.close();
+    await closeClean(second);
 
-    expect(outside).toEqual([]);
-    expect(errors).toEqual([]);
-    await context.close();
+    await closeClean({ outside, errors, context });
   });
 
   it('solves for the length of a target gain and shows stacking figures for Yagi bays', async () => {
@@ -84,8 +80,6 @@ describe('end-fire length calculator in Chromium', () => {
     expect(await page.locator('[data-code="stacking-practice"]').count()).toBe(1);
     await typeInto(page, ID, 'g', '17 dBi');
     await expect.poll(() => outputText(page, 'gainDbi')).toMatch(/17\.00 dBi$/);
-    expect(outside).toEqual([]);
-    expect(errors).toEqual([]);
-    await context.close();
+    await closeClean({ outside, errors, context });
   });
 });

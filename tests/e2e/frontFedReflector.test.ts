@@ -1,6 +1,6 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Browser, Page } from 'playwright-core';
-import { launch, openPage, outputText, siteUrl, typeInto, waitForCalculator } from './browser';
+import { launch, openPage, outputText, siteUrl, typeInto, waitForCalculator, closeClean } from './browser';
 import { createReflectorCalculator } from '../../calc/calculators/reflector';
 import { teamConventions } from '../../site/conventions';
 
@@ -123,13 +123,9 @@ describe('front-fed reflector calculator in Chromium', () => {
     expect(await outputText(second.page, 'gainDbi')).toBe(shown.gain);
     expect(await outputText(second.page, 'crossoverDb')).toBe(shown.crossover);
     expect(await second.page.locator('[data-testid="link-notices"]').count()).toBe(0);
-    expect(second.outside).toEqual([]);
-    expect(second.errors).toEqual([]);
-    await second.context.close();
+    await closeClean(second);
 
-    expect(outside).toEqual([]);
-    expect(errors).toEqual([]);
-    await context.close();
+    await closeClean({ outside, errors, context });
   });
 
   it('solving for the diameter reaches the target gain; fields that do not apply say so', async () => {
@@ -141,9 +137,7 @@ describe('front-fed reflector calculator in Chromium', () => {
     expect(await page.locator(`#${ID}-g-msg`).innerText()).not.toMatch(/Not used/);
     await page.selectOption(`#${ID}-solve`, 'gain');
     await expect.poll(() => page.locator(`#${ID}-g-msg`).innerText()).toMatch(/Not used/);
-    expect(outside).toEqual([]);
-    expect(errors).toEqual([]);
-    await context.close();
+    await closeClean({ outside, errors, context });
   });
 
   it('loads only from its own origin in both themes, and every input has a visible label', async () => {
@@ -158,9 +152,7 @@ describe('front-fed reflector calculator in Chromium', () => {
         [...document.querySelectorAll('.calc input, .calc select')].filter((el) => !document.querySelector(`label[for="${el.id}"]`)).length,
       );
       expect(unlabeled).toBe(0);
-      expect(outside).toEqual([]);
-      expect(errors).toEqual([]);
-      await context.close();
+      await closeClean({ outside, errors, context });
     }
   });
 });

@@ -1,6 +1,6 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Browser } from 'playwright-core';
-import { launch, openPage, outputText, siteUrl, typeInto, waitForCalculator } from './browser';
+import { launch, openPage, outputText, siteUrl, typeInto, waitForCalculator, closeClean } from './browser';
 
 const ID = 'scan-loss';
 let browser: Browser;
@@ -46,8 +46,6 @@ describe('scan-loss estimate in Chromium', () => {
 
     await typeInto(page, ID, 'nexp', '-2');
     await expect.poll(() => page.locator(`#${ID}-nexp-msg`).innerText()).toMatch(/Out of range/);
-    expect(outside).toEqual([]);
-    expect(errors).toEqual([]);
-    await context.close();
+    await closeClean({ outside, errors, context });
   });
 });

@@ -1,6 +1,6 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Browser } from 'playwright-core';
-import { launch, openPage, outputText, siteUrl, typeInto, waitForCalculator } from './browser';
+import { launch, openPage, outputText, siteUrl, typeInto, waitForCalculator, closeClean } from './browser';
 
 const ID = 'wavelength-spacing';
 let browser: Browser;
@@ -72,13 +72,9 @@ describe('wavelength & spacing calculator in Chromium', () => {
     expect(await second.page.locator(`#${ID}-lat`).inputValue()).toBe('rectangular');
     expect(await outputText(second.page, 'lambda0High')).toBe('2.4983 cm');
     expect(await second.page.locator('[data-testid="link-notices"]').count()).toBe(0);
-    expect(second.outside).toEqual([]);
-    expect(second.errors).toEqual([]);
-    await second.context.close();
+    await closeClean(second);
 
-    expect(outside).toEqual([]);
-    expect(errors).toEqual([]);
-    await context.close();
+    await closeClean({ outside, errors, context });
   });
 
   it('a broken link gives notices, falls back field by field, and the page keeps working', async () => {
@@ -94,9 +90,7 @@ describe('wavelength & spacing calculator in Chromium', () => {
     expect(await outputText(page, 'lambda0High')).toBe('2.9979 cm');
     await typeInto(page, ID, 'f', '3 GHz');
     await expect.poll(() => outputText(page, 'lambda0High')).toBe('9.9931 cm');
-    expect(outside).toEqual([]);
-    expect(errors).toEqual([]);
-    await context.close();
+    await closeClean({ outside, errors, context });
   });
 
   it('works from the keyboard: tab into a field, type, results follow', async () => {
@@ -152,9 +146,7 @@ describe('wavelength & spacing calculator in Chromium', () => {
         expect(response?.status(), path).toBe(200);
         await page.waitForLoadState('networkidle');
       }
-      expect(outside).toEqual([]);
-      expect(errors).toEqual([]);
-      await context.close();
+      await closeClean({ outside, errors, context });
     }
   });
 });
