@@ -2,7 +2,12 @@ import { DIPOLE_DIRECTIVITY_DBI } from '../constants';
 import { freeSpaceWavelengthM } from '../wavelength';
 import { NBS_YAGI_DESIGNS, YAGI_BOOM_LIMITS_WAVELENGTHS, yagiBoomForGainWavelengths, yagiGainDbd } from '../endFire/yagiGain';
 import { hpbwFromDirectivityDeg } from '../endFire/stacking';
+import { endFireLengthForDirectivity } from '../endFire/endFireArray';
 import type { Candidate, SizingRequirement } from './candidate';
+
+/** End-fire lines are described beside the Yagi up to this gain (beyond it they are hundreds of λ long). */
+const MAX_END_FIRE_LINE_NOTE_DBI = 22;
+const END_FIRE_LINE_SPACING_WAVELENGTHS = 0.25;
 
 /** Longest boom in the published Yagi–Uda table, λ. */
 const LONGEST_PUBLISHED_BOOM = NBS_YAGI_DESIGNS[NBS_YAGI_DESIGNS.length - 1].boomWavelengths;
@@ -32,6 +37,12 @@ export function sizeEndFire(requirement: SizingRequirement): Candidate {
     flags.push(`impractical: a ${boom.toFixed(1)} λ boom is past the longest published design (${LONGEST_PUBLISHED_BOOM} λ); the gain there is an extrapolation`);
   }
   const gainDbi = yagiGainDbd(boom).gainDbd + DIPOLE_DIRECTIVITY_DBI;
+  if (targetDbi <= MAX_END_FIRE_LINE_NOTE_DBI) {
+    const line = endFireLengthForDirectivity('hansenWoodyard', END_FIRE_LINE_SPACING_WAVELENGTHS, 10 ** (targetDbi / 10));
+    if (line) notes.push(`A Hansen–Woodyard line of isotropic elements at λ/4 would need ${line.count} elements, ${(line.lengthWavelengths * lambda).toPrecision(3)} m (${line.lengthWavelengths.toFixed(1)} λ), from the engine's exact directivity.`);
+  } else {
+    notes.push(`Any end-fire line for ${targetDbi.toFixed(1)} dBi would be hundreds of wavelengths long; not worth computing.`);
+  }
   const hpbw = hpbwFromDirectivityDeg(10 ** (gainDbi / 10));
   const lengthM = boom * lambda;
   return {
