@@ -17,5 +17,5 @@ export {
 export type { YagiDesignPoint, YagiEstimateKind, YagiGainEstimate } from './yagiGain';
 export { NBS_YAGI_DESIGNS, YAGI_BOOM_LIMITS_WAVELENGTHS, yagiBoomForGainWavelengths, yagiGainDbd } from './yagiGain';
 export type { StackBays } from './stacking';
-export { hpbwFromDirectivityDeg, stackingDistanceWavelengths, stackingGainIncreaseDb } from './stacking';
+export { directivityForEqualPlaneHpbw, hpbwFromDirectivityDeg, stackingDistanceWavelengths, stackingGainIncreaseDb } from './stacking';
 export { squareApertureDirectivity, squareApertureSideForDirectivity } from './apertureComparison';

@@ -39,3 +39,9 @@ export function hpbwFromDirectivityDeg(directivity: number): number {
   const beamAreaDeg2 = (4 * Math.PI * (180 / Math.PI) ** 2) / directivity;
   return Math.min(180, Math.sqrt(beamAreaDeg2));
 }
+
+/** Inverse of hpbwFromDirectivityDeg: directivity of a beam with equal E- and H-plane HPBW (degrees), D ≈ 41 253/θ². */
+export function directivityForEqualPlaneHpbw(hpbwDeg: number): number {
+  requireInRange('hpbwDeg', hpbwDeg, 1e-6, 180, '°');
+  return (4 * Math.PI * (180 / Math.PI) ** 2) / (hpbwDeg * hpbwDeg);
+}

@@ -1,7 +1,7 @@
 import { DIPOLE_DIRECTIVITY_DBI } from '../constants';
 import { freeSpaceWavelengthM } from '../wavelength';
 import { NBS_YAGI_DESIGNS, YAGI_BOOM_LIMITS_WAVELENGTHS, yagiBoomForGainWavelengths, yagiGainDbd } from '../endFire/yagiGain';
-import { hpbwFromDirectivityDeg } from '../endFire/stacking';
+import { directivityForEqualPlaneHpbw, hpbwFromDirectivityDeg } from '../endFire/stacking';
 import { endFireLengthForDirectivity } from '../endFire/endFireArray';
 import type { Candidate, SizingRequirement } from './candidate';
 
@@ -25,8 +25,7 @@ export function sizeEndFire(requirement: SizingRequirement): Candidate {
   if (requirement.kind === 'gain') {
     targetDbi = requirement.gainEdgeDbi;
   } else {
-    // Directivity whose equal-plane beam has the required HPBW: D = 41 253/θ² (Kraus, beam-area estimate).
-    targetDbi = 10 * Math.log10((4 * Math.PI * (180 / Math.PI) ** 2) / (requirement.hpbwDeg * requirement.hpbwDeg));
+    targetDbi = 10 * Math.log10(directivityForEqualPlaneHpbw(requirement.hpbwDeg));
   }
   let boom = yagiBoomForGainWavelengths(targetDbi - DIPOLE_DIRECTIVITY_DBI);
   if (boom === null) {

@@ -3,6 +3,7 @@ import { buildArrayModel } from '../array/buildArray';
 import { directivity } from '../array/directivity';
 import { principalPlaneMetrics } from '../array/beamMetrics';
 import { besselJ0 } from '../numeric/besselJ';
+import { projectedApertureLossDb } from '../scanLoss';
 import type { Candidate, SizingRequirement } from './candidate';
 
 /**
@@ -49,14 +50,14 @@ export function sizeSparseArray(requirement: SizingRequirement, kind: SparseKind
   const step = kind === 'y' ? 3 : 1;
   const meets = (count: number): boolean => {
     if (requirement.kind === 'gain') {
-      return forwardDirectivityDbi(kind, count, dWl) + 10 * Math.log10(eta) + 10 * Math.log10(Math.cos((Math.min(scan, 89.9) * Math.PI) / 180)) >= requirement.gainEdgeDbi;
+      return forwardDirectivityDbi(kind, count, dWl) + 10 * Math.log10(eta) + projectedApertureLossDb(Math.min(scan, 89.9)) >= requirement.gainEdgeDbi;
     }
     const m = principalPlaneMetrics(model(kind, count, dWl, 0, 0), { beamwidthOnly: true });
     const worst = Math.max(m.theta.hpbwDeg ?? Infinity, m.phi.hpbwDeg ?? Infinity);
     return worst <= requirement.hpbwDeg;
   };
   // A λ/2-spaced ring or Y of isotropic elements has directivity close to N; over a ground plane 2N.
-  const scanFactor = Math.cos((Math.min(scan, 89.9) * Math.PI) / 180);
+  const scanFactor = 10 ** (projectedApertureLossDb(Math.min(scan, 89.9)) / 10);
   const estimate = requirement.kind === 'gain' ? Math.ceil(10 ** (requirement.gainEdgeDbi / 10) / (2 * eta * scanFactor)) : 0;
   let lo = 2 * step;
   let hi = 4 * step;
@@ -83,7 +84,7 @@ export function sizeSparseArray(requirement: SizingRequirement, kind: SparseKind
   const edge = scan > 0 ? principalPlaneMetrics(model(kind, count, dWl, Math.min(scan, 89), 0), { beamwidthOnly: true }) : broadside;
   const edgeAz = scan > 0 ? principalPlaneMetrics(model(kind, count, dWl, Math.min(scan, 89), kind === 'ring' ? 45 : 60), { beamwidthOnly: true }) : broadside;
   const gainBroadside = forwardDirectivityDbi(kind, count, dWl) + 10 * Math.log10(eta);
-  const gainEdge = gainBroadside + 10 * Math.log10(Math.cos((Math.min(scan, 89.9) * Math.PI) / 180));
+  const gainEdge = gainBroadside + projectedApertureLossDb(Math.min(scan, 89.9));
   const flags: string[] = [];
   const notes = [
     `Sparse aperture: the first sidelobe of a uniformly excited ring is about ${RING_FIRST_SIDELOBE_DB.toFixed(1)} dB (Y arrays are similar); chosen where the beamwidth must stay the same over azimuth.`,
@@ -125,7 +126,7 @@ function impracticalSparse(requirement: SizingRequirement, kind: SparseKind, cou
     spacingM,
     steering: 'electronic, any azimuth',
     gainBroadsideDbi: gain,
-    gainEdgeDbi: gain + 10 * Math.log10(Math.cos((Math.min(scan, 89.9) * Math.PI) / 180)),
+    gainEdgeDbi: gain + projectedApertureLossDb(Math.min(scan, 89.9)),
     hpbwBroadsideDeg: [null, null],
     hpbwEdgeDeg: null,
     flags: [`needs about ${count} elements (more than ${MAX_SPARSE_ELEMENTS}): impractical as a ${kind === 'ring' ? 'ring' : 'Y'}; a filled aperture does better`],

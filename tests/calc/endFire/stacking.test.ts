@@ -29,3 +29,10 @@ describe('square aperture of side L (Balanis, "Antenna Theory", 4th ed., ch. 12:
     expect(squareApertureSideForDirectivity(squareApertureDirectivity(3.7))).toBeCloseTo(3.7, 12);
   });
 });
+
+describe('directivityForEqualPlaneHpbw', () => {
+  it('inverts hpbwFromDirectivityDeg (Kraus beam-area estimate, round trip)', async () => {
+    const { directivityForEqualPlaneHpbw, hpbwFromDirectivityDeg } = await import('../../../calc/endFire/stacking');
+    for (const bw of [2, 10, 30, 90]) expect(hpbwFromDirectivityDeg(directivityForEqualPlaneHpbw(bw))).toBeCloseTo(bw, 10);
+  });
+});
