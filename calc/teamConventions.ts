@@ -11,8 +11,12 @@ export interface TeamConventions {
   };
   /** Spacing kept below the grating-lobe limit, as a fraction of the limit (0.05 = 5 % below). */
   spacingMarginFraction: number;
-  /** Exponent n of the cos^n θ element-pattern model used in scan-loss estimates. */
-  scanLossCosExponent: number;
+  /**
+   * The team's default element: exponent n of its embedded element **power** pattern cosⁿθ
+   * (forward half space). Every calculator that models an element pattern uses this one
+   * convention (power, not field: a field pattern cos^m θ is a power pattern with n = 2m).
+   */
+  elementPowerExponent: number;
   /** Default efficiencies (linear, 0…1). */
   efficiencies: {
     /** Front-fed reflector aperture efficiency for quick sizing. */

@@ -70,7 +70,7 @@ for (const b of [3, 4, 5]) {
   const q = phaseQuantizationEffect({ geometry: { kind: 'linear', count: 32, spacingWavelengths: 0.5 }, steering: { thetaDeg: 20, phiDeg: 0 } }, b);
   console.log(`  ${b} bits at 20°: step ${q.phaseStepDeg}°, pointing error ${q.pointingErrorDeg.toFixed(3)}°, SLL ${q.peakSidelobeDb?.toFixed(2)} → ${q.quantizedPeakSidelobeDb?.toFixed(2)} dB`);
 }
-console.log(`  scan loss cos^${teamConventions.scanLossCosExponent}(60°) = ${dB(Math.cos(Math.PI / 3) ** teamConventions.scanLossCosExponent)} dB`);
+console.log(`  scan loss cos^${teamConventions.elementPowerExponent}(60°) = ${dB(Math.cos(Math.PI / 3) ** teamConventions.elementPowerExponent)} dB`);
 
 console.log('\n## Circular and Y');
 show('circular 24 elements, radius 2 λ', { geometry: { kind: 'circular', count: 24, radiusWavelengths: 2 } });

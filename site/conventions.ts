@@ -7,7 +7,7 @@ import type { TeamConventions } from '../calc/teamConventions';
 export const teamConventions: TeamConventions = {
   units: { frequency: 'GHz', length: 'cm' },
   spacingMarginFraction: 0.05,
-  scanLossCosExponent: 1.3,
+  elementPowerExponent: 1.3,
   efficiencies: { reflectorAperture: 0.6, arrayRadiation: 0.8 },
   maxScanDeg: 45,
   designFrequencyHz: 10e9,
@@ -21,7 +21,7 @@ export const conventionNotes: { key: string; value: (c: TeamConventions) => stri
   { key: 'maxScanDeg', value: (c) => `${c.maxScanDeg}°`, note: 'Default largest scan angle from broadside for array sizing and spacing.' },
   { key: 'lattice', value: (c) => c.lattice, note: 'Default lattice for planar arrays. An equilateral triangular lattice allows about 15 % larger spacing than a square one for the same scan, so it needs about 13 % fewer elements.' },
   { key: 'spacingMarginFraction', value: (c) => `${(c.spacingMarginFraction * 100).toFixed(0)} % below the limit`, note: 'We never design at the grating-lobe limit: the grating lobe sits on the horizon there and rises fast with any frequency or scan overshoot. Recommended spacings are this fraction below the limit at the highest frequency.' },
-  { key: 'scanLossCosExponent', value: (c) => `n = ${c.scanLossCosExponent}`, note: 'Scan-loss estimates model the embedded element power pattern as cosⁿθ. n = 1 is the projected-aperture loss alone; measured well-matched elements usually fall between 1.2 and 1.5.' },
+  { key: 'elementPowerExponent', value: (c) => `element power pattern cosⁿθ, n = ${c.elementPowerExponent}`, note: 'The team\'s default element: its embedded element power pattern is cosⁿθ (the exponent of the power pattern, never of the field; a field pattern cosᵐθ is n = 2m). Scan loss, architecture sizing and the array pattern explorer all start from it. n = 1 is the projected-aperture loss alone; measured well-matched elements usually fall between 1.2 and 1.5.' },
   { key: 'efficiencies.reflectorAperture', value: (c) => `${(c.efficiencies.reflectorAperture * 100).toFixed(0)} %`, note: 'Aperture efficiency assumed for front-fed reflectors in quick sizing (the reflector calculator computes its own budget).' },
   { key: 'efficiencies.arrayRadiation', value: (c) => `${(c.efficiencies.arrayRadiation * 100).toFixed(0)} %`, note: 'Radiation efficiency assumed for phased arrays in quick sizing (feed network and element losses).' },
 ];

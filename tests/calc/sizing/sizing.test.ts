@@ -30,7 +30,7 @@ describe('architecture sizing round-trips with each architecture’s own calcula
   });
   it('planar array: the scan-loss calculator, given the sized width, returns the required gain at the scan edge', () => {
     const c = candidate({ g: '33 dBi', saz: '50 deg', lat: 'rectangular' }, 'planarArray');
-    const scan = computeScanLoss({ frequencyHz: 10e9, spacingM: c.spacingM!, lattice: 'rectangular', sizeBy: 'width', apertureWidthM: c.sizeM, elementCount: 4, scanMaxDeg: 50, elementModel: 'cosine', cosineExponent: teamConventions.scanLossCosExponent, radiationEfficiency: teamConventions.efficiencies.arrayRadiation, targetGainDbi: null });
+    const scan = computeScanLoss({ frequencyHz: 10e9, spacingM: c.spacingM!, lattice: 'rectangular', sizeBy: 'width', apertureWidthM: c.sizeM, elementCount: 4, scanMaxDeg: 50, elementModel: 'cosine', cosineExponent: teamConventions.elementPowerExponent, radiationEfficiency: teamConventions.efficiencies.arrayRadiation, targetGainDbi: null });
     expect(scan.values.gainEdgeDbi).toBeCloseTo(33, 9);
   });
   it('planar array: spacing is the grating-lobe limit at the highest frequency less the team margin (Mailloux §2.1)', () => {
