@@ -15,7 +15,8 @@ export type QuantityKind =
   | 'frequency' // Hz
   | 'length' // m (a field may also accept wavelengths)
   | 'angle' // degrees
-  | 'decibel' // dB (gain, loss, taper, sidelobe level…)
+  | 'decibel' // dB (gain, loss, a signed change…)
+  | 'levelBelowPeak' // dB below a peak, a positive number (sidelobe level, edge taper): "30 dB below the peak"
   | 'power' // W (accepts dBm, dBW)
   | 'powerDensity' // W/m²
   | 'number' // a pure number (ratio, permittivity, exponent…)
@@ -77,6 +78,12 @@ export interface OutputSpec {
   unit?: string;
   /** Short note on how the value is found, shown as a tooltip/description. */
   description?: string;
+  /**
+   * Smallest magnitude the model resolves, in the output's internal unit (e.g. 1e-3 for an
+   * angle in degrees found by root-finding to 1e-6 rad). Smaller values are numerical noise and
+   * are shown as 0; the value calc/ returns is not changed.
+   */
+  resolution?: number;
 }
 
 export interface CalcResult<Data = unknown> {

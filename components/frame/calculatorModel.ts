@@ -12,7 +12,7 @@ import { exampleFor, parseQuantity } from './quantity';
 export type FieldTexts = Record<string, string>;
 
 export type FieldStatus =
-  | { ok: true; value: number | string | null; canonical: string; parsedDisplay: string }
+  | { ok: true; value: number | string | null; canonical: string; parsedDisplay: string; note?: string }
   | { ok: false; message: string };
 
 export interface Evaluation<Data> {
@@ -35,6 +35,7 @@ function isNumberSpec(spec: ParamSpec): spec is NumberParamSpec {
 
 function rangeText(spec: NumberParamSpec): string {
   const kind = spec.kind;
+  if (kind === 'levelBelowPeak') return `${spec.minExclusive ? 'above' : 'from'} ${spec.min} to ${spec.max} dB below the peak`;
   const format = (x: number) => {
     const f = formatQuantity(x, kind, 4);
     return `${f.text}${f.unit ? ` ${f.unit}` : ''}`;
@@ -75,7 +76,8 @@ export function validateField(spec: ParamSpec, text: string, frequenciesHz: numb
     return { ok: false, message: `Out of range: expected a value ${rangeText(spec)}.` };
   }
   const shown = formatQuantity(value, spec.kind, 6);
-  return { ok: true, value, canonical: parsed.canonical, parsedDisplay: `${shown.text}${shown.unit ? ` ${shown.unit}` : ''}` };
+  const parsedDisplay = `${shown.text}${shown.unit ? ` ${shown.unit}` : ''}`;
+  return parsed.note ? { ok: true, value, canonical: parsed.canonical, parsedDisplay, note: parsed.note } : { ok: true, value, canonical: parsed.canonical, parsedDisplay };
 }
 
 /** Validates every field; frequency fields first, so λ-relative lengths can use them. */

@@ -83,6 +83,8 @@ export function formatQuantity(value: number, kind: QuantityKind | 'percent' | '
       return { text: formatSignificant(value, digits), unit: unitOverride ?? '°' };
     case 'decibel':
       return { text: formatFixedDb(value), unit: unitOverride ?? 'dB' };
+    case 'levelBelowPeak':
+      return { text: formatSignificant(Math.abs(value), Math.max(digits, 1)), unit: 'dB below the peak' };
     case 'power': {
       if (unitOverride === 'dBm' || (value > 0 && value < 1e-6)) return { text: formatFixedDb(10 * Math.log10(value) + 30), unit: 'dBm' };
       if (Math.abs(value) >= 1e3) return { text: formatSignificant(value / 1e3, digits), unit: 'kW' };
@@ -110,9 +112,14 @@ function formatFixedDb(value: number): string {
   return text === '-0.00' ? '0.00' : text.replace('-', '−');
 }
 
-/** Formats an output by its spec. */
+/** A value whose magnitude is below `resolution` (numerical noise) as exactly 0. */
+export function belowResolutionAsZero(value: number, resolution: number | undefined): number {
+  return resolution !== undefined && Math.abs(value) < resolution ? 0 : value;
+}
+
+/** Formats an output by its spec (noise below the output's resolution shows as 0). */
 export function formatOutput(spec: OutputSpec & { unit?: string }, value: number): Formatted {
-  return formatQuantity(value, spec.kind, spec.digits, spec.unit);
+  return formatQuantity(belowResolutionAsZero(value, spec.resolution), spec.kind, spec.digits, spec.unit);
 }
 
 /** "10 GHz" from a canonical "10GHz"; "0.5 λ" from "0.5lambda". */

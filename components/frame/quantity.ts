@@ -7,7 +7,7 @@ import type { QuantityKind } from '../../calc/calculator';
 import { M_PER_FT, M_PER_IN } from '../../calc/constants';
 
 export type ParseResult =
-  | { ok: true; value: number; canonical: string }
+  | { ok: true; value: number; canonical: string; note?: string }
   | { ok: false; message: string };
 
 interface UnitDef {
@@ -77,6 +77,12 @@ const UNITS: Record<QuantityKind, { units: UnitDef[]; bare: string; caseInsensit
       { canonical: 'dBi', spellings: ['dbi'], toInternal: scale(1) },
     ],
   },
+  levelBelowPeak: {
+    bare: 'dB',
+    caseInsensitive: true,
+    example: '30 dB (below the peak)',
+    units: [{ canonical: 'dB', spellings: ['db'], toInternal: (x) => Math.abs(x) }],
+  },
   power: {
     bare: 'W',
     caseInsensitive: false,
@@ -139,6 +145,9 @@ export function parseQuantity(text: string, kind: QuantityKind, context: ParseCo
   } else {
     const needle = spec.caseInsensitive ? unitText.toLowerCase() : unitText;
     unit = spec.units.find((u) => u.spellings.some((s) => (spec.caseInsensitive ? s.toLowerCase() : s) === needle));
+    if (!unit && kind === 'levelBelowPeak') {
+      return { ok: false, message: `A level below the peak is in dB relative to the peak, not "${unitText}": e.g. 30 dB.` };
+    }
     if (!unit) {
       const accepted = unitsFor(kind);
       return {
@@ -153,6 +162,18 @@ export function parseQuantity(text: string, kind: QuantityKind, context: ParseCo
   if (value === null) return { ok: false, message: 'A length in wavelengths needs a valid frequency first.' };
   if (!Number.isFinite(value)) return { ok: false, message: 'The value is too large.' };
   if (kind === 'count' && !Number.isInteger(value)) return { ok: false, message: 'Expected a whole number.' };
+  if (kind === 'levelBelowPeak') return levelBelowPeakResult(x, value);
   const normalizedNumber = numberText.replace(/^\+/, '');
   return { ok: true, value: value === 0 ? 0 : value, canonical: `${normalizedNumber}${unit!.canonical}` };
+}
+
+/**
+ * A level below the peak is a positive number of dB ("30 dB below the peak"). A negative entry
+ * means the same level written the other way: it is accepted, stored positive, and the note says
+ * how it was read, so the sign is never flipped silently.
+ */
+function levelBelowPeakResult(typed: number, depthDb: number): ParseResult {
+  const canonical = `${String(depthDb)}dB`;
+  if (typed >= 0) return { ok: true, value: depthDb, canonical };
+  return { ok: true, value: depthDb, canonical, note: `−${String(depthDb)} dB read as ${String(depthDb)} dB below the peak` };
 }

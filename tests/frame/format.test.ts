@@ -53,3 +53,18 @@ describe('scientific notation', () => {
     expect(formatSignificant(2.5e12, 2)).toBe('2.5×10¹²');
   });
 });
+
+describe('formatOutput: noise below an output\'s resolution shows as 0', () => {
+  it('a beam offset of 1.54e-7° with resolution 1e-3° shows as 0°, a real offset is kept', async () => {
+    const { formatOutput } = await import('../../components/frame/format');
+    const spec = { key: 'peakOffsetDeg', label: 'offset', kind: 'angle' as const, digits: 3, resolution: 1e-3 };
+    expect(formatOutput(spec, 1.54e-7).text).toBe('0');
+    expect(formatOutput(spec, -1.54e-7).text).toBe('0');
+    expect(formatOutput(spec, 0.0123).text).toBe('0.0123');
+    expect(formatOutput({ ...spec, resolution: undefined }, 1.54e-7).text).toBe('1.54×10⁻⁷');
+  });
+  it('a level below the peak shows as a positive number of dB below the peak', () => {
+    expect(formatQuantity(-30, 'levelBelowPeak', 4)).toEqual({ text: '30', unit: 'dB below the peak' });
+    expect(formatQuantity(25.6, 'levelBelowPeak', 4)).toEqual({ text: '25.6', unit: 'dB below the peak' });
+  });
+});

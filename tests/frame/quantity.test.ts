@@ -3,7 +3,7 @@ import fc from 'fast-check';
 import { parseQuantity } from '../../components/frame/quantity';
 import type { QuantityKind } from '../../calc/calculator';
 
-const KINDS: QuantityKind[] = ['frequency', 'length', 'angle', 'decibel', 'power', 'powerDensity', 'number', 'count'];
+const KINDS: QuantityKind[] = ['frequency', 'length', 'angle', 'decibel', 'levelBelowPeak', 'power', 'powerDensity', 'number', 'count'];
 
 function value(text: string, kind: QuantityKind, wavelengthM?: number): number {
   const r = parseQuantity(text, kind, { wavelengthM });
@@ -109,5 +109,27 @@ describe('parseQuantity: bad input gives a message, never a throw', () => {
         expect(second.ok && second.value).toBe(first.value);
       }),
     );
+  });
+});
+
+describe('parseQuantity: levels below the peak (positive dB below the peak)', () => {
+  it('reads "30 dB" and "30" as 30 dB below the peak, with no note', () => {
+    for (const text of ['30 dB', '30', '30dB']) {
+      const r = parseQuantity(text, 'levelBelowPeak');
+      expect(r.ok && r.value).toBe(30);
+      expect(r.ok && r.note).toBeUndefined();
+    }
+  });
+  it('accepts the other sign, stores it positive and says so (never flipped silently)', () => {
+    const r = parseQuantity('−30 dB', 'levelBelowPeak');
+    expect(r.ok && r.value).toBe(30);
+    expect(r.ok && r.canonical).toBe('30dB');
+    expect(r.ok && r.note).toBe('−30 dB read as 30 dB below the peak');
+  });
+  it('rejects dBi and other units with a message naming the convention', () => {
+    const r = parseQuantity('30 dBi', 'levelBelowPeak');
+    expect(r.ok).toBe(false);
+    expect(!r.ok && r.message).toMatch(/dB relative to the peak, not "dBi"/);
+    expect(parseQuantity('30 dBm', 'levelBelowPeak').ok).toBe(false);
   });
 });
