@@ -16,7 +16,7 @@ export type QuantityKind =
   | 'length' // m (a field may also accept wavelengths)
   | 'angle' // degrees
   | 'decibel' // dB (gain, loss, a signed change…)
-  | 'levelBelowPeak' // dB below a peak, a positive number (sidelobe level, edge taper): "30 dB below the peak"
+  | 'levelBelowPeak' // dB relative to a peak, ≤ 0 (sidelobe level, edge taper): −30 dB is 30 dB below the peak
   | 'power' // W (accepts dBm, dBW)
   | 'powerDensity' // W/m²
   | 'number' // a pure number (ratio, permittivity, exponent…)

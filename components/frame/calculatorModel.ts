@@ -35,7 +35,7 @@ function isNumberSpec(spec: ParamSpec): spec is NumberParamSpec {
 
 function rangeText(spec: NumberParamSpec): string {
   const kind = spec.kind;
-  if (kind === 'levelBelowPeak') return `${spec.minExclusive ? 'above' : 'from'} ${spec.min} to ${spec.max} dB below the peak`;
+  if (kind === 'levelBelowPeak') return `from ${formatQuantity(spec.min, kind, 4).text} to ${formatQuantity(spec.max, kind, 4).text} dB (${-spec.max} to ${-spec.min} dB below the peak)`;
   const format = (x: number) => {
     const f = formatQuantity(x, kind, 4);
     return `${f.text}${f.unit ? ` ${f.unit}` : ''}`;
@@ -76,7 +76,9 @@ export function validateField(spec: ParamSpec, text: string, frequenciesHz: numb
     return { ok: false, message: `Out of range: expected a value ${rangeText(spec)}.` };
   }
   const shown = formatQuantity(value, spec.kind, 6);
-  const parsedDisplay = `${shown.text}${shown.unit ? ` ${shown.unit}` : ''}`;
+  const parsedDisplay = spec.kind === 'levelBelowPeak'
+    ? `${shown.text} dB, ${formatQuantity(-value, 'number', 6).text} dB below the peak`
+    : `${shown.text}${shown.unit ? ` ${shown.unit}` : ''}`;
   return parsed.note ? { ok: true, value, canonical: parsed.canonical, parsedDisplay, note: parsed.note } : { ok: true, value, canonical: parsed.canonical, parsedDisplay };
 }
 

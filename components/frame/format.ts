@@ -84,7 +84,7 @@ export function formatQuantity(value: number, kind: QuantityKind | 'percent' | '
     case 'decibel':
       return { text: formatFixedDb(value), unit: unitOverride ?? 'dB' };
     case 'levelBelowPeak':
-      return { text: formatSignificant(Math.abs(value), Math.max(digits, 1)), unit: 'dB below the peak' };
+      return { text: formatSignificant(-Math.abs(value), Math.max(digits, 1)), unit: 'dB' };
     case 'power': {
       if (unitOverride === 'dBm' || (value > 0 && value < 1e-6)) return { text: formatFixedDb(10 * Math.log10(value) + 30), unit: 'dBm' };
       if (Math.abs(value) >= 1e3) return { text: formatSignificant(value / 1e3, digits), unit: 'kW' };

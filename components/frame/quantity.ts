@@ -80,8 +80,8 @@ const UNITS: Record<QuantityKind, { units: UnitDef[]; bare: string; caseInsensit
   levelBelowPeak: {
     bare: 'dB',
     caseInsensitive: true,
-    example: '30 dB (below the peak)',
-    units: [{ canonical: 'dB', spellings: ['db'], toInternal: (x) => Math.abs(x) }],
+    example: '-30 dB',
+    units: [{ canonical: 'dB', spellings: ['db'], toInternal: (x) => -Math.abs(x) }],
   },
   power: {
     bare: 'W',
@@ -146,7 +146,7 @@ export function parseQuantity(text: string, kind: QuantityKind, context: ParseCo
     const needle = spec.caseInsensitive ? unitText.toLowerCase() : unitText;
     unit = spec.units.find((u) => u.spellings.some((s) => (spec.caseInsensitive ? s.toLowerCase() : s) === needle));
     if (!unit && kind === 'levelBelowPeak') {
-      return { ok: false, message: `A level below the peak is in dB relative to the peak, not "${unitText}": e.g. 30 dB.` };
+      return { ok: false, message: `A level below the peak is in dB relative to the peak, not "${unitText}": e.g. −30 dB.` };
     }
     if (!unit) {
       const accepted = unitsFor(kind);
@@ -168,12 +168,14 @@ export function parseQuantity(text: string, kind: QuantityKind, context: ParseCo
 }
 
 /**
- * A level below the peak is a positive number of dB ("30 dB below the peak"). A negative entry
- * means the same level written the other way: it is accepted, stored positive, and the note says
- * how it was read, so the sign is never flipped silently.
+ * A level below the peak is a negative number of dB relative to the peak (−30 dB: 30 dB below
+ * it), the sign outputs use too. A positive entry means the same level written as a depth: it
+ * is accepted, stored negative, and the note says how it was read, so no sign flips silently.
  */
-function levelBelowPeakResult(typed: number, depthDb: number): ParseResult {
-  const canonical = `${String(depthDb)}dB`;
-  if (typed >= 0) return { ok: true, value: depthDb, canonical };
-  return { ok: true, value: depthDb, canonical, note: `−${String(depthDb)} dB read as ${String(depthDb)} dB below the peak` };
+function levelBelowPeakResult(typed: number, levelDb: number): ParseResult {
+  const depth = String(-levelDb);
+  const value = levelDb === 0 ? 0 : levelDb;
+  const canonical = value === 0 ? '0dB' : `-${depth}dB`;
+  if (typed <= 0) return { ok: true, value, canonical };
+  return { ok: true, value, canonical, note: `${depth} dB read as −${depth} dB, ${depth} dB below the peak` };
 }

@@ -103,3 +103,20 @@ describe('unusedReason: fields the current choices leave unread', () => {
     }
   });
 });
+
+describe('validateField: a level below the peak states its convention at the field', () => {
+  const spec = { kind: 'levelBelowPeak' as const, key: 'sll', name: 'sidelobeDb', label: 'Design sidelobe level', defaultText: '-30 dB', min: -80, max: -13, description: '' };
+  it('echoes −30 dB as "−30 dB, 30 dB below the peak"; a positive entry is read as the same level with a note', async () => {
+    const { validateField } = await import('../../components/frame/calculatorModel');
+    const a = validateField(spec, '-30 dB');
+    expect(a.ok && a.parsedDisplay).toBe('−30 dB, 30 dB below the peak');
+    const b = validateField(spec, '30 dB');
+    expect(b.ok && b.value).toBe(-30);
+    expect(b.ok && b.note).toMatch(/read as −30 dB/);
+  });
+  it('out of range names both forms', async () => {
+    const { validateField } = await import('../../components/frame/calculatorModel');
+    const r = validateField(spec, '-10 dB');
+    expect(!r.ok && r.message).toBe('Out of range: expected a value from −80 to −13 dB (13 to 80 dB below the peak).');
+  });
+});

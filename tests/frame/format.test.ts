@@ -63,8 +63,8 @@ describe('formatOutput: noise below an output\'s resolution shows as 0', () => {
     expect(formatOutput(spec, 0.0123).text).toBe('0.0123');
     expect(formatOutput({ ...spec, resolution: undefined }, 1.54e-7).text).toBe('1.54×10⁻⁷');
   });
-  it('a level below the peak shows as a positive number of dB below the peak', () => {
-    expect(formatQuantity(-30, 'levelBelowPeak', 4)).toEqual({ text: '30', unit: 'dB below the peak' });
-    expect(formatQuantity(25.6, 'levelBelowPeak', 4)).toEqual({ text: '25.6', unit: 'dB below the peak' });
+  it('a level below the peak shows as a negative number of dB, whatever sign it was given', () => {
+    expect(formatQuantity(-30, 'levelBelowPeak', 4)).toEqual({ text: '−30', unit: 'dB' });
+    expect(formatQuantity(25.6, 'levelBelowPeak', 4)).toEqual({ text: '−25.6', unit: 'dB' });
   });
 });

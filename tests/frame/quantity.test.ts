@@ -112,19 +112,22 @@ describe('parseQuantity: bad input gives a message, never a throw', () => {
   });
 });
 
-describe('parseQuantity: levels below the peak (positive dB below the peak)', () => {
-  it('reads "30 dB" and "30" as 30 dB below the peak, with no note', () => {
-    for (const text of ['30 dB', '30', '30dB']) {
+describe('parseQuantity: levels below the peak (dB relative to the peak, ≤ 0)', () => {
+  it('reads "-30 dB", "−30" and "-30dB" as −30 dB, with no note', () => {
+    for (const text of ['-30 dB', '−30', '-30dB']) {
       const r = parseQuantity(text, 'levelBelowPeak');
-      expect(r.ok && r.value).toBe(30);
+      expect(r.ok && r.value).toBe(-30);
+      expect(r.ok && r.canonical).toBe('-30dB');
       expect(r.ok && r.note).toBeUndefined();
     }
   });
-  it('accepts the other sign, stores it positive and says so (never flipped silently)', () => {
-    const r = parseQuantity('−30 dB', 'levelBelowPeak');
-    expect(r.ok && r.value).toBe(30);
-    expect(r.ok && r.canonical).toBe('30dB');
-    expect(r.ok && r.note).toBe('−30 dB read as 30 dB below the peak');
+  it('accepts a depth written positive, stores −30 dB and says so (never flipped silently)', () => {
+    const r = parseQuantity('30 dB', 'levelBelowPeak');
+    expect(r.ok && r.value).toBe(-30);
+    expect(r.ok && r.canonical).toBe('-30dB');
+    expect(r.ok && r.note).toBe('30 dB read as −30 dB, 30 dB below the peak');
+    const zero = parseQuantity('0 dB', 'levelBelowPeak');
+    expect(zero.ok && Object.is(zero.value, 0) && zero.canonical).toBe('0dB');
   });
   it('rejects dBi and other units with a message naming the convention', () => {
     const r = parseQuantity('30 dBi', 'levelBelowPeak');
