@@ -72,8 +72,13 @@ export interface OutputSpec {
   key: string;
   label: string;
   kind: QuantityKind | 'percent' | 'ratio';
-  /** Significant digits for display (decibels always show two decimals). */
+  /** Significant digits for display (decibels show two decimals unless `decimals` says otherwise). */
   digits: number;
+  /**
+   * Decimals of a decibel output, where the model supports fewer than the usual two (a
+   * rule-of-thumb figure or a value transcribed from a published table: 1).
+   */
+  decimals?: number;
   /** Display unit where the kind alone does not say it: 'dBi', 'dBd', 'λ₀', 'm²'… */
   unit?: string;
   /** Short note on how the value is found, shown as a tooltip/description. */

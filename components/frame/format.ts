@@ -64,7 +64,7 @@ export function pickFrequencyUnit(maxHz: number): { factor: number; unit: string
 }
 
 /** Formats a value of a physical kind in a unit that reads well. */
-export function formatQuantity(value: number, kind: QuantityKind | 'percent' | 'ratio', digits: number, unitOverride?: string): Formatted {
+export function formatQuantity(value: number, kind: QuantityKind | 'percent' | 'ratio', digits: number, unitOverride?: string, decimals = 2): Formatted {
   if (!Number.isFinite(value)) return { text: '—', unit: '' };
   switch (kind) {
     case 'frequency': {
@@ -82,7 +82,7 @@ export function formatQuantity(value: number, kind: QuantityKind | 'percent' | '
     case 'angle':
       return { text: formatSignificant(value, digits), unit: unitOverride ?? '°' };
     case 'decibel':
-      return { text: formatFixedDb(value), unit: unitOverride ?? 'dB' };
+      return { text: formatFixedDb(value, decimals), unit: unitOverride ?? 'dB' };
     case 'levelBelowPeak':
       return { text: formatSignificant(-Math.abs(value), Math.max(digits, 1)), unit: 'dB' };
     case 'power': {
@@ -105,11 +105,11 @@ export function formatQuantity(value: number, kind: QuantityKind | 'percent' | '
   }
 }
 
-/** Decibels read best with a fixed two decimals (−13.26 dB, 35.21 dBi). */
-function formatFixedDb(value: number): string {
+/** Decibels read best with fixed decimals, two by default (−13.26 dB, 35.21 dBi). */
+function formatFixedDb(value: number, decimals = 2): string {
   if (!Number.isFinite(value)) return '—';
-  const text = value.toFixed(2);
-  return text === '-0.00' ? '0.00' : text.replace('-', '−');
+  const text = value.toFixed(decimals);
+  return /^-0(\.0*)?$/.test(text) ? text.slice(1) : text.replace('-', '−');
 }
 
 /** A value whose magnitude is below `resolution` (numerical noise) as exactly 0. */
@@ -119,7 +119,7 @@ export function belowResolutionAsZero(value: number, resolution: number | undefi
 
 /** Formats an output by its spec (noise below the output's resolution shows as 0). */
 export function formatOutput(spec: OutputSpec & { unit?: string }, value: number): Formatted {
-  return formatQuantity(belowResolutionAsZero(value, spec.resolution), spec.kind, spec.digits, spec.unit);
+  return formatQuantity(belowResolutionAsZero(value, spec.resolution), spec.kind, spec.digits, spec.unit, spec.decimals);
 }
 
 /** "10 GHz" from a canonical "10GHz"; "0.5 λ" from "0.5lambda". */

@@ -68,3 +68,14 @@ describe('formatOutput: noise below an output\'s resolution shows as 0', () => {
     expect(formatQuantity(25.6, 'levelBelowPeak', 4)).toEqual({ text: '−25.6', unit: 'dB' });
   });
 });
+
+describe('formatOutput: decibel decimals', () => {
+  it('two decimals by default, fewer where the spec says the model supports fewer', async () => {
+    const { formatOutput } = await import('../../components/frame/format');
+    const spec = { key: 'g', label: 'gain', kind: 'decibel' as const, digits: 4, unit: 'dBi' };
+    expect(formatOutput(spec, 12.346).text).toBe('12.35');
+    expect(formatOutput({ ...spec, decimals: 1 }, 12.346).text).toBe('12.3');
+    expect(formatOutput({ ...spec, decimals: 1 }, -0.04).text).toBe('0.0');
+    expect(formatOutput(spec, -0.004).text).toBe('0.00');
+  });
+});
