@@ -126,7 +126,8 @@ describe('computeArrayExplorer: Taylor n̄ too small', () => {
 
 describe('computeArrayExplorer: clean peak offset', () => {
   it('is exactly 0 at broadside for symmetric arrays (before: 1.54e-7° for the 8 × 8 triangular planar array)', () => {
-    for (const texts of [{ geo: 'planar', lat: 'triangular', nx: '8', ny: '8' }, { geo: 'planar', lat: 'rectangular', nx: '16', ny: '12' }, { geo: 'linear', nx: '16' }]) {
+    const cases: Array<Record<string, string>> = [{ geo: 'planar', lat: 'triangular', out: 'rectangle', nx: '8', ny: '8' }, { geo: 'planar', lat: 'rectangular', out: 'rectangle', nx: '16', ny: '12' }, { geo: 'linear', nx: '16' }];
+    for (const texts of cases) {
       const r = computeArrayExplorer(inputsFor({ ...texts, el: 'isotropic', th: '0 deg', d: '0.5 λ' }), 'complete');
       expect(r.values.peakOffsetDeg, JSON.stringify(texts)).toBe(0);
     }
