@@ -117,7 +117,10 @@ export function computeArrayExplorer(inputs: CalcInputs, mode: ExplorerMode = 'c
   if (lobes.length > 0) {
     warnings.push(warning('grating-lobe-visible', 'caution', `${lobes.length} grating lobe(s) in or at the edge of visible space at this spacing, frequency and steering (marked on the u–v map)${lobeLevel}. They are not counted as sidelobes.`, ['gratingLobeCount', 'onsetDeg', 'gratingLobeDb']));
   } else if (gratingLobeDb !== null) {
-    warnings.push(warning('grating-lobe-at-horizon', 'caution', `A grating lobe centred just outside visible space reaches into it at the horizon${lobeLevel}; it is not counted as a sidelobe.`, ['gratingLobeDb']));
+    // a lobe edge below the sidelobes is only a note; above them it is a caution
+    const sidelobeLevel = theta ? worstSidelobe(shownPlanes) : null;
+    const severity = sidelobeLevel === null || gratingLobeDb > sidelobeLevel ? 'caution' : 'note';
+    warnings.push(warning('grating-lobe-at-horizon', severity, `A grating lobe centred just outside visible space reaches into it at the horizon${lobeLevel}; it is not counted as a sidelobe.`, ['gratingLobeDb']));
   }
   if (inputs.taper === 'taylor') {
     const nbarWarning = taylorNbarWarning(inputs.nbar as number, inputs.sidelobeDb as number, ['sidelobeDb']);

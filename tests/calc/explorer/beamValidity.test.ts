@@ -95,7 +95,17 @@ describe('computeArrayExplorer: grating lobes reported apart from sidelobes', ()
     const r = computeArrayExplorer(inputsFor({ geo: 'linear', nx: '8', d: '0.98 λ', th: '0 deg', el: 'isotropic' }), 'complete');
     expect(r.values.gratingLobeCount).toBe(0);
     expect(r.values.gratingLobeDb!).toBeCloseTo(10 * Math.log10(power(8, 0.98, 1)), 9);
-    expect(r.warnings.find((x) => x.code === 'grating-lobe-at-horizon')?.message).toContain('−0.4 dB');
+    const w = r.warnings.find((x) => x.code === 'grating-lobe-at-horizon')!;
+    expect(w.message).toContain('−0.4 dB');
+    expect(w.severity).toBe('caution'); // above the −12.8 dB sidelobes
+  });
+  it('an 8-element λ/2 line steered to 50°: the edge of the lobe centred at u = sin 50° − 2 reaches the horizon at |AF(u = −1)|² ≈ −23 dB, below the sidelobes, so only a note (Balanis §6.3 formula, to 1e-9 dB)', () => {
+    const r = computeArrayExplorer(inputsFor({ geo: 'linear', nx: '8', d: '0.5 λ', th: '50 deg', ph: '0 deg', el: 'isotropic' }), 'complete');
+    const du = -1 - Math.sin((50 * Math.PI) / 180);
+    expect(r.values.gratingLobeCount).toBe(0);
+    expect(r.values.gratingLobeDb!).toBeCloseTo(10 * Math.log10(power(8, 0.5, du)), 9);
+    expect(r.values.gratingLobeDb!).toBeLessThan(r.values.sidelobeDb!);
+    expect(r.warnings.find((x) => x.code === 'grating-lobe-at-horizon')?.severity).toBe('note');
   });
   it('a 4 × 4 square lattice at 1 λ: four lobes at 0 dB; at λ/2 none and no level (null)', () => {
     const wide = computeArrayExplorer(inputsFor({ geo: 'planar', lat: 'rectangular', out: 'rectangle', nx: '4', ny: '4', d: '1 λ', el: 'isotropic', th: '0 deg' }), 'complete');
