@@ -91,16 +91,17 @@ function walkOutward(at: (t: number) => number, evaluate: (ts: ArrayLike<number>
 
 /**
  * Refines a pattern maximum near t found by golden-section search: golden-section search on a
- * flat peak stops near √ε of the beamwidth, so the peak is taken as the root of the central-
- * difference slope P(t + h) − P(t − h) (Brent), h = 1e-5·scale. When that slope is zero at
+ * flat peak stops near √ε of the beamwidth, so the peak is taken as the root (Brent) of the
+ * five-point central-difference slope 8[P(t + h) − P(t − h)] − [P(t + 2h) − P(t − 2h)], h = 1e-5·scale,
+ * whose bias is O(h⁴). When that slope is zero at
  * t = 0 within rounding and P(0) is as high as P(t) (a beam symmetric about the steering
  * direction, or flat), the peak is exactly 0.
  */
 function refinePeak(at: (t: number) => number, t: number, scale: number): number {
   const h = 1e-5 * scale;
-  const slope = (x: number) => at(x + h) - at(x - h);
+  const slope = (x: number) => 8 * (at(x + h) - at(x - h)) - (at(x + 2 * h) - at(x - 2 * h));
   const atZero = at(0);
-  if (Math.abs(slope(0)) <= 8 * Number.EPSILON * atZero && atZero >= at(t) * (1 - 1e-12)) return 0;
+  if (Math.abs(slope(0)) <= 32 * Number.EPSILON * atZero && atZero >= at(t) * (1 - 1e-12)) return 0;
   const a = t - 0.01 * scale, b = t + 0.01 * scale;
   const fa = slope(a), fb = slope(b);
   if (!(fa > 0 && fb < 0)) return t;

@@ -141,6 +141,19 @@ describe('principalPlaneMetrics: beam peak offset', () => {
       expect(Math.abs(theta.peakOffsetDeg), `θ0=${thetaDeg}`).toBeLessThan(1e-9);
     }
   });
+  it('with a cos θ element the peak is the root of the analytic pattern derivative: 6 × λ/2 line steered to 40° peaks about 2.46° toward broadside (derivative of |AF|²cos²θ written out from the Balanis §6.3 array factor, root by Brent here), within 1e-8°', () => {
+    const count = 6, x0 = Math.sin(40 / DEG);
+    const derivative = (theta: number) => {
+      const x = Math.PI * 0.5 * (Math.sin(theta) - x0), dx = Math.PI * 0.5 * Math.cos(theta);
+      const af = Math.sin(count * x) / (count * Math.sin(x));
+      const dAf = (count * Math.cos(count * x) * Math.sin(x) - Math.sin(count * x) * Math.cos(x)) / (count * Math.sin(x) ** 2);
+      return 2 * af * dAf * dx * Math.cos(theta) ** 2 - 2 * af * af * Math.cos(theta) * Math.sin(theta);
+    };
+    const peakDeg = brentRoot(derivative, 35 / DEG, 39.99 / DEG, 1e-16) * DEG;
+    const { theta } = principalPlaneMetrics(buildArrayModel({ geometry: { kind: 'linear', count, spacingWavelengths: 0.5 }, steering: { thetaDeg: 40, phiDeg: 0 }, element: { kind: 'cosine', exponent: 1 } }));
+    expect(peakDeg - 40).toBeCloseTo(-2.46, 2);
+    expect(Math.abs(theta.peakOffsetDeg - (peakDeg - 40))).toBeLessThan(1e-8);
+  });
   it('follows the element pattern when it pulls the beam: a 4 × λ/2 line of cos θ elements steered to 50° peaks between broadside and 50°', () => {
     const { theta } = principalPlaneMetrics(buildArrayModel({ geometry: { kind: 'linear', count: 4, spacingWavelengths: 0.5 }, steering: { thetaDeg: 50, phiDeg: 0 }, element: { kind: 'cosine', exponent: 1 } }));
     expect(theta.peakOffsetDeg).toBeLessThan(-1);
