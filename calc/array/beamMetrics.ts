@@ -5,6 +5,7 @@ import { goldenMinimize } from '../numeric/goldenMinimize';
 import type { CalcWarning } from '../warnings';
 import { warning } from '../warnings';
 import { arrayDiameterWavelengths } from './geometry';
+import { distanceFromMainBeam, distanceToGratingLobe } from './gratingLobes';
 import { patternPowerAtDirections } from './patternPower';
 import type { ArrayModel, DirectionDeg } from './types';
 
@@ -18,10 +19,19 @@ export interface PlaneMetrics {
   hpbwDeg?: number;
   /** First-null beamwidth (minima on each side found by golden-section search), undefined if none. */
   fnbwDeg?: number;
-  /** Highest sidelobe relative to the peak (negative dB), undefined if there is none. */
+  /** Highest sidelobe relative to the peak (negative dB), undefined if there is none. Grating lobes are not sidelobes: see gratingLobeDb. */
   peakSidelobeDb?: number;
   /** Angle of that sidelobe from the beam direction in this plane. */
   peakSidelobeOffsetDeg?: number;
+  /**
+   * Highest grating lobe met in this plane relative to the peak (dB), for arrays on a lattice: a
+   * maximum closer to a grating-lobe centre û0 + p·b1 + q·b2 than the main beam's first null is to
+   * û0. Includes a lobe whose centre lies just outside visible space but which reaches into it at
+   * the horizon. Undefined if the plane meets none.
+   */
+  gratingLobeDb?: number;
+  /** Angle of that grating lobe from the beam direction in this plane. */
+  gratingLobeOffsetDeg?: number;
 }
 
 /** Options of principalPlaneMetrics. */
@@ -79,6 +89,37 @@ function walkOutward(at: (t: number) => number, evaluate: (ts: ArrayLike<number>
   return { half };
 }
 
+/**
+ * Refines a pattern maximum near t found by golden-section search: golden-section search on a
+ * flat peak stops near √ε of the beamwidth, so the peak is taken as the root (Brent) of the
+ * five-point central-difference slope 8[P(t + h) − P(t − h)] − [P(t + 2h) − P(t − 2h)], h = 1e-5·scale,
+ * whose bias is O(h⁴). When that slope is zero at
+ * t = 0 within rounding and P(0) is as high as P(t) (a beam symmetric about the steering
+ * direction, or flat), the peak is exactly 0.
+ */
+function refinePeak(at: (t: number) => number, t: number, scale: number): number {
+  const h = 1e-5 * scale;
+  const slope = (x: number) => 8 * (at(x + h) - at(x - h)) - (at(x + 2 * h) - at(x - 2 * h));
+  const atZero = at(0);
+  if (Math.abs(slope(0)) <= 32 * Number.EPSILON * atZero && atZero >= at(t) * (1 - 1e-12)) return 0;
+  const a = t - 0.01 * scale, b = t + 0.01 * scale;
+  const fa = slope(a), fb = slope(b);
+  if (!(fa > 0 && fb < 0)) return t;
+  return brentRoot(slope, a, b, 1e-15 * (1 + Math.abs(t)));
+}
+
+/** Great-circle parameters t in [start, start + span] where the circle crosses the horizon w = 0. */
+function horizonCrossings(u0: Vector, e: Vector, start: number, span: number): number[] {
+  if (u0[2] === 0 && e[2] === 0) return []; // the whole circle lies in the horizon plane
+  const first = Math.atan2(-u0[2], e[2]);
+  const crossings: number[] = [];
+  for (let k = -4; k <= 4; k++) {
+    const t = first + (k * Math.PI);
+    if (t > start && t < start + span) crossings.push(t);
+  }
+  return crossings;
+}
+
 function planeMetrics(model: ArrayModel, plane: 'theta' | 'phi', u0: Vector, e: Vector, region: 'forward' | 'sphere', beamwidthOnly = false): PlaneMetrics {
   const evaluate = planeEvaluator(model, u0, e);
   const at = (t: number) => evaluate([t]).power[0];
@@ -88,7 +129,7 @@ function planeMetrics(model: ArrayModel, plane: 'theta' | 'phi', u0: Vector, e: 
   const scanned = evaluate(scan).power;
   let best = 32;
   for (let i = 0; i < scan.length; i++) if (scanned[i] > scanned[best]) best = i;
-  const tPeak = goldenMinimize((t) => -at(t), scan[Math.max(0, best - 1)], scan[Math.min(64, best + 1)], 1e-13);
+  const tPeak = refinePeak(at, goldenMinimize((t) => -at(t), scan[Math.max(0, best - 1)], scan[Math.min(64, best + 1)], 1e-13), tau);
   const peak = at(tPeak);
   const result: PlaneMetrics = { plane, peakOffsetDeg: radToDeg(tPeak) };
   if (!(peak > 0)) return result;
@@ -99,26 +140,52 @@ function planeMetrics(model: ArrayModel, plane: 'theta' | 'phi', u0: Vector, e: 
   if (right.null === undefined || left.null === undefined) return result;
   result.fnbwDeg = radToDeg(right.null - left.null);
   if (beamwidthOnly) return result;
-  // Sidelobes: scan the rest of the great circle, refine the largest local maxima.
+  // Sidelobes: scan the rest of the great circle, refine the largest local maxima. In the forward
+  // region the horizon points (w = 0) count too: a lobe may peak exactly there.
+  const start = right.null, span = 2 * Math.PI - (right.null - left.null);
   const count = Math.min(400_000, Math.ceil((2 * Math.PI) / (tau / 6)));
-  const ts = Float64Array.from({ length: count }, (_, i) => right.null! + ((2 * Math.PI - (right.null! - left.null!)) * i) / (count - 1));
+  const ts = Float64Array.from({ length: count }, (_, i) => start + (span * i) / (count - 1));
   const { power, w } = evaluate(ts);
-  const candidates: number[] = [];
+  const candidates: Array<{ t: number; p: number; refine?: [number, number] }> = [];
   for (let i = 1; i < count - 1; i++) {
     if (region === 'forward' && (w[i - 1] < 0 || w[i] < 0 || w[i + 1] < 0)) continue;
-    if (power[i] >= power[i - 1] && power[i] >= power[i + 1] && power[i] > 0) candidates.push(i);
+    if (power[i] >= power[i - 1] && power[i] >= power[i + 1] && power[i] > 0) candidates.push({ t: ts[i], p: power[i], refine: [ts[i - 1], ts[i + 1]] });
   }
-  candidates.sort((a, b) => power[b] - power[a]);
-  let sidelobe = 0, sidelobeT = 0;
-  for (const i of candidates.slice(0, 4)) {
-    const t = goldenMinimize((x) => -at(x), ts[i - 1], ts[i + 1], 1e-12);
-    const p = Math.max(at(t), power[i]);
-    if (p > sidelobe) { sidelobe = p; sidelobeT = t; }
+  if (region === 'forward') {
+    for (const t of horizonCrossings(u0, e, start, span)) {
+      const p = at(t);
+      const inward = Math.min(count - 1, Math.max(0, Math.round(((t - start) / span) * (count - 1))));
+      const neighbour = [inward - 1, inward, inward + 1].filter((i) => i >= 0 && i < count && w[i] > 0 && Math.abs(ts[i] - t) > 1e-15);
+      if (p > 0 && neighbour.every((i) => p >= power[i])) candidates.push({ t, p });
+    }
   }
-  if (sidelobe > 0) {
-    result.peakSidelobeDb = 10 * Math.log10(sidelobe / peak);
-    const wrapped = ((sidelobeT + Math.PI) % (2 * Math.PI) + 2 * Math.PI) % (2 * Math.PI) - Math.PI;
-    result.peakSidelobeOffsetDeg = radToDeg(wrapped);
+  candidates.sort((a, b) => b.p - a.p);
+  const lattice = model.lattice?.vectorsWavelengths;
+  const beamUv: [number, number] = [u0[0], u0[1]];
+  const uvAt = (t: number): [number, number] => [u0[0] * Math.cos(t) + e[0] * Math.sin(t), u0[1] * Math.cos(t) + e[1] * Math.sin(t)];
+  const mainBeamRadius = lattice ? Math.max(distanceFromMainBeam(lattice, beamUv, uvAt(right.null)), distanceFromMainBeam(lattice, beamUv, uvAt(left.null))) : 0;
+  const isGratingLobe = (t: number) => lattice !== undefined && distanceToGratingLobe(lattice, beamUv, uvAt(t)) < mainBeamRadius;
+  const highest = { sidelobe: { p: 0, t: 0, refined: 0 }, grating: { p: 0, t: 0, refined: 0 } };
+  for (const candidate of candidates) {
+    const kind = isGratingLobe(candidate.t) ? highest.grating : highest.sidelobe;
+    if (kind.refined >= 4) continue;
+    kind.refined++;
+    let { t, p } = candidate;
+    if (candidate.refine) {
+      const refined = goldenMinimize((x) => -at(x), candidate.refine[0], candidate.refine[1], 1e-12);
+      const pRefined = at(refined);
+      if (pRefined > p) { t = refined; p = pRefined; }
+    }
+    if (p > kind.p) { kind.p = p; kind.t = t; }
+  }
+  const wrapDeg = (t: number) => radToDeg(((t + Math.PI) % (2 * Math.PI) + 2 * Math.PI) % (2 * Math.PI) - Math.PI);
+  if (highest.sidelobe.p > 0) {
+    result.peakSidelobeDb = 10 * Math.log10(highest.sidelobe.p / peak);
+    result.peakSidelobeOffsetDeg = wrapDeg(highest.sidelobe.t);
+  }
+  if (highest.grating.p > 0) {
+    result.gratingLobeDb = 10 * Math.log10(highest.grating.p / peak);
+    result.gratingLobeOffsetDeg = wrapDeg(highest.grating.t);
   }
   return result;
 }

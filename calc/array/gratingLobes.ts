@@ -65,3 +65,48 @@ export function latticeVectorsWavelengths(vectorsM: Array<[number, number]>, fre
   const wavelengthM = freeSpaceWavelengthM(frequencyHz);
   return vectorsM.map(([x, y]) => [requireFinite('latticeVector.x', x, 'm') / wavelengthM, requireFinite('latticeVector.y', y, 'm') / wavelengthM]);
 }
+
+/**
+ * Offset (direction cosines) of a point (u, v) from the replica û0 + p·b1 + q·b2 of the beam
+ * nearest to it, among the orders allowed: for a line only the component along the line counts
+ * (the array factor is constant across it), for a two-dimensional lattice the plain distance.
+ */
+function nearestReplicaDistance(vectorsWavelengths: Array<[number, number]>, beamUv: [number, number], pointUv: [number, number], allow: (p: number, q: number) => boolean): number {
+  const du = pointUv[0] - beamUv[0], dv = pointUv[1] - beamUv[1];
+  const reciprocal = reciprocalVectors(vectorsWavelengths);
+  if (reciprocal.length === 1) {
+    const [bx, by] = reciprocal[0];
+    const length = Math.hypot(bx, by);
+    const along = (du * bx + dv * by) / length; // component along the line's reciprocal direction
+    const order = Math.round(along / length);
+    let best = Infinity;
+    for (const p of [order - 1, order, order + 1]) if (allow(p, 0)) best = Math.min(best, Math.abs(along - p * length));
+    return best;
+  }
+  // fractional lattice coordinates: Δ = α b1 + β b2 with α = Δ·a1, β = Δ·a2 (a_i·b_j = δ_ij)
+  const [[a1x, a1y], [a2x, a2y]] = vectorsWavelengths;
+  const alpha = Math.round(du * a1x + dv * a1y), beta = Math.round(du * a2x + dv * a2y);
+  let best = Infinity;
+  for (let p = alpha - 2; p <= alpha + 2; p++) {
+    for (let q = beta - 2; q <= beta + 2; q++) {
+      if (!allow(p, q)) continue;
+      best = Math.min(best, Math.hypot(du - p * reciprocal[0][0] - q * reciprocal[1][0], dv - p * reciprocal[0][1] - q * reciprocal[1][1]));
+    }
+  }
+  return best;
+}
+
+/**
+ * Distance in direction cosines from (u, v) to the nearest grating-lobe centre û0 + p·b1 + q·b2,
+ * (p, q) ≠ (0, 0), visible or not (along the line for a line array). A pattern maximum closer to a
+ * grating-lobe centre than the main beam's first null is to û0 belongs to that grating lobe: the
+ * array factor repeats the main beam there (Mailloux, "Phased Array Antenna Handbook", 2nd ed., §2.1).
+ */
+export function distanceToGratingLobe(vectorsWavelengths: Array<[number, number]>, beamUv: [number, number], pointUv: [number, number]): number {
+  return nearestReplicaDistance(vectorsWavelengths, beamUv, pointUv, (p, q) => p !== 0 || q !== 0);
+}
+
+/** Distance in direction cosines from (u, v) to the main beam û0 (along the line for a line array), in the metric of distanceToGratingLobe. */
+export function distanceFromMainBeam(vectorsWavelengths: Array<[number, number]>, beamUv: [number, number], pointUv: [number, number]): number {
+  return nearestReplicaDistance(vectorsWavelengths, beamUv, pointUv, (p, q) => p === 0 && q === 0);
+}

@@ -27,6 +27,9 @@ import {
 } from '../array/index';
 import { explorerArray, inputsKey, type ExplorerGeometry } from '../explorer/explorerInputs';
 import { cutSamples, directivityNeedsQuadrature, MAX_QUADRATURE_WORK, patternWork, quadratureWork, SYNC_BUDGET_EVALUATIONS } from '../explorer/workEstimate';
+import { elementNullWarning, peakOffSteeringWarning, withoutBeamFigures } from '../explorer/beamValidity';
+import { highestGratingLobeDb, levelText, planePeakPower } from '../explorer/gratingLobeLevel';
+import { taylorNbarWarning } from '../array/taylorNbar';
 import { frequencyDefaultText } from './defaultText';
 
 /** Parts of the result that may be left to the background worker. */
@@ -106,9 +109,25 @@ export function computeArrayExplorer(inputs: CalcInputs, mode: ExplorerMode = 'c
   }
 
   const lobes = array.lattice ? gratingLobeDirections(model.lattice!.vectorsWavelengths, model.beam) : [];
+  const shownPlanes = theta ? (phi ? [theta, phi] : [theta]) : [];
+  // Beam figures are valid only where the array forms a beam at (θ0, φ0).
+  const elementNull = elementNullWarning(array.spec.element ?? { kind: 'isotropic' }, model.beam);
+  const gratingLobeDb = array.lattice && theta ? highestGratingLobeDb(model, lobes, shownPlanes, Math.max(...shownPlanes.map((p) => planePeakPower(model, p)))) : null;
+  const lobeLevel = gratingLobeDb === null || elementNull ? '' : `, the highest at ${levelText(gratingLobeDb)} dB relative to the main beam`;
   if (lobes.length > 0) {
-    warnings.push(warning('grating-lobe-visible', 'caution', `${lobes.length} grating lobe(s) in visible space at this spacing, frequency and steering (marked on the u–v map).`, ['gratingLobeCount', 'onsetDeg']));
+    warnings.push(warning('grating-lobe-visible', 'caution', `${lobes.length} grating lobe(s) in or at the edge of visible space at this spacing, frequency and steering (marked on the u–v map)${lobeLevel}. They are not counted as sidelobes.`, ['gratingLobeCount', 'onsetDeg', 'gratingLobeDb']));
+  } else if (gratingLobeDb !== null) {
+    // a lobe edge below the sidelobes is only a note; above them it is a caution
+    const sidelobeLevel = theta ? worstSidelobe(shownPlanes) : null;
+    const severity = sidelobeLevel === null || gratingLobeDb > sidelobeLevel ? 'caution' : 'note';
+    warnings.push(warning('grating-lobe-at-horizon', severity, `A grating lobe centred just outside visible space reaches into it at the horizon${lobeLevel}; it is not counted as a sidelobe.`, ['gratingLobeDb']));
   }
+  if (inputs.taper === 'taylor') {
+    const nbarWarning = taylorNbarWarning(inputs.nbar as number, inputs.sidelobeDb as number, ['sidelobeDb']);
+    if (nbarWarning) warnings.push(nbarWarning);
+  }
+  const offSteering = elementNull || !theta ? null : peakOffSteeringWarning(shownPlanes.map((metrics) => ({ metrics, name: metrics.plane === 'theta' ? 'scan plane' : 'orthogonal plane' })));
+  for (const w of [elementNull, offSteering]) if (w) warnings.push(w);
   if (array.spacingWavelengths < 0.25 && array.geometry !== 'circular') {
     warnings.push(warning('close-spacing', 'note', 'Spacing below λ/4: mutual coupling is strong, and the embedded element pattern, not this free-space model, decides the real pattern.', ['spacingWavelengths']));
   }
@@ -120,7 +139,7 @@ export function computeArrayExplorer(inputs: CalcInputs, mode: ExplorerMode = 'c
   const bits = inputs.phaseBits as number;
   const sidelobes = theta ? worstSidelobe(phi ? [theta, phi] : [theta]) : null;
   return {
-    values: {
+    values: withoutBeamFigures({
       elementCount: count,
       lambda0: array.wavelengthM,
       spacingWavelengths: array.spacingWavelengths,
@@ -132,12 +151,13 @@ export function computeArrayExplorer(inputs: CalcInputs, mode: ExplorerMode = 'c
       fnbwScanDeg: theta?.fnbwDeg ?? null,
       fnbwCrossDeg: phi?.fnbwDeg ?? null,
       sidelobeDb: sidelobes,
+      gratingLobeDb,
       peakOffsetDeg: theta ? theta.peakOffsetDeg : null,
       gratingLobeCount: array.lattice ? lobes.length : null,
       onsetDeg: array.lattice ? gratingLobeOnsetScanDeg(array.spacingWavelengths, array.lattice) : null,
       taperEfficiencyPercent: 100 * taperEfficiency(amplitudes),
       phaseStepDeg: bits > 0 ? 360 / 2 ** bits : null,
-    },
+    }, elementNull !== null),
     warnings,
     data: {
       inputs,
@@ -208,7 +228,8 @@ export function createArrayExplorerCalculator(conventions: TeamConventions, opti
       { key: 'hpbwCrossDeg', label: 'HPBW, orthogonal plane', kind: 'angle', digits: 4 },
       { key: 'fnbwScanDeg', label: 'FNBW, scan plane', kind: 'angle', digits: 4 },
       { key: 'fnbwCrossDeg', label: 'FNBW, orthogonal plane', kind: 'angle', digits: 4 },
-      { key: 'sidelobeDb', label: 'Peak sidelobe level (principal planes)', kind: 'decibel', digits: 4, description: 'Highest sidelobe in the two planes through the beam, forward half space' },
+      { key: 'sidelobeDb', label: 'Peak sidelobe level (principal planes)', kind: 'decibel', digits: 4, description: 'Highest sidelobe in the two planes through the beam, forward half space; grating lobes are reported apart' },
+      { key: 'gratingLobeDb', label: 'Highest grating lobe level', kind: 'decibel', digits: 4, description: 'Relative to the main beam, at each grating-lobe direction and in the principal planes (lattice geometries)' },
       { key: 'peakOffsetDeg', label: 'Beam peak offset from θ₀ (scan plane)', kind: 'angle', digits: 3, description: 'From the element pattern and phase quantization' },
       { key: 'gratingLobeCount', label: 'Grating lobes in visible space', kind: 'count', digits: 0 },
       { key: 'onsetDeg', label: 'Grating lobe enters at scan', kind: 'angle', digits: 3, description: 'Worst scan plane; 90° means none at any scan' },

@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { principalPlaneMetrics } from '../../../calc/array/beamMetrics';
 import { buildArrayModel } from '../../../calc/array/buildArray';
+import { gratingLobeDirections } from '../../../calc/array/gratingLobes';
 import { brentRoot } from '../../../calc/numeric/brentRoot';
 import { goldenMinimize } from '../../../calc/numeric/goldenMinimize';
 import { jinc } from '../../../calc/numeric/besselJ';
@@ -66,5 +67,96 @@ describe('principalPlaneMetrics edge cases', () => {
     const r = principalPlaneMetrics(buildArrayModel({ geometry: { kind: 'linear', count: 8, spacingWavelengths: 0.5 } }));
     expect(r.phi.hpbwDeg).toBeUndefined();
     expect(r.warnings.map((w) => w.code)).toContain('no-half-power-point');
+  });
+});
+
+/** Uniform N-element line array factor power at u − u0 for spacing d (λ): |sin(Nπd·Δu)/(N sin(πd·Δu))|² (Balanis, "Antenna Theory", 4th ed., §6.3). */
+function uniformLinePower(count: number, spacing: number, du: number): number {
+  const x = Math.PI * spacing * du;
+  return Math.abs(Math.sin(x)) < 1e-15 ? 1 : (Math.sin(count * x) / (count * Math.sin(x))) ** 2;
+}
+/** Highest sidelobe of that array factor between its first and second nulls (golden-section search on the formula). */
+function uniformLineFirstSidelobeDb(count: number, spacing: number): number {
+  const du = goldenMinimize((x) => -uniformLinePower(count, spacing, x), 1 / (count * spacing), 2 / (count * spacing), 1e-14);
+  return 10 * Math.log10(uniformLinePower(count, spacing, du));
+}
+
+describe('principalPlaneMetrics: grating lobes are not sidelobes, and the horizon counts', () => {
+  it('an 8-element 1 λ line at broadside: both grating lobes sit exactly at θ = ±90° at 0 dB (array factor periodic in u with period λ/d, Mailloux, "Phased Array Antenna Handbook", 2nd ed., §2.1) and the peak sidelobe is the −12.80 dB first sidelobe (Balanis §6.3 formula), to 1e-9 dB', () => {
+    const model = buildArrayModel({ geometry: { kind: 'linear', count: 8, spacingWavelengths: 1 } });
+    const { theta } = principalPlaneMetrics(model);
+    expect(theta.gratingLobeDb!).toBeCloseTo(0, 9);
+    expect(Math.abs(theta.gratingLobeOffsetDeg!)).toBeCloseTo(90, 9);
+    expect(theta.peakSidelobeDb!).toBeCloseTo(uniformLineFirstSidelobeDb(8, 1), 9);
+    expect(theta.peakSidelobeDb!).toBeCloseTo(-12.797, 3);
+    // consistent with gratingLobeDirections, which counts the two lobes on the horizon (u = ±1)
+    const lobes = gratingLobeDirections(model.lattice!.vectorsWavelengths, model.beam);
+    expect(lobes.map((l) => l.thetaDeg)).toEqual([90, 90]);
+  });
+  it('a lobe centred just outside visible space (8 × 0.98 λ) is a grating lobe where it reaches the horizon: its level there equals the array factor at u = 1, to 1e-9 dB (Balanis §6.3 formula)', () => {
+    const model = buildArrayModel({ geometry: { kind: 'linear', count: 8, spacingWavelengths: 0.98 } });
+    const { theta } = principalPlaneMetrics(model);
+    expect(gratingLobeDirections(model.lattice!.vectorsWavelengths, model.beam)).toHaveLength(0);
+    expect(theta.gratingLobeDb!).toBeCloseTo(10 * Math.log10(uniformLinePower(8, 0.98, 1)), 9);
+    expect(Math.abs(theta.gratingLobeOffsetDeg!)).toBe(90);
+    expect(theta.peakSidelobeDb!).toBeCloseTo(uniformLineFirstSidelobeDb(8, 0.98), 9);
+  });
+  it('a sidelobe that peaks beyond the horizon is measured at θ = ±90° (4 × 0.3 λ: the pattern rises from its first null to u = 1), to 1e-9 dB of the Balanis §6.3 formula', () => {
+    const { theta } = principalPlaneMetrics(buildArrayModel({ geometry: { kind: 'linear', count: 4, spacingWavelengths: 0.3 } }));
+    expect(theta.peakSidelobeDb!).toBeCloseTo(10 * Math.log10(uniformLinePower(4, 0.3, 1)), 9); // −14.82 dB
+    expect(Math.abs(theta.peakSidelobeOffsetDeg!)).toBe(90);
+    expect(theta.gratingLobeDb).toBeUndefined();
+  });
+  it('a 0.9 λ line steered to 35°: the grating lobe at asin(sin 35° − 1/0.9) is reported at 0 dB and the peak sidelobe stays near −13 dB (Mailloux §2.1)', () => {
+    const { theta } = principalPlaneMetrics(buildArrayModel({ geometry: { kind: 'linear', count: 12, spacingWavelengths: 0.9 }, steering: { thetaDeg: 35, phiDeg: 0 } }));
+    const lobeDeg = Math.asin(Math.sin(35 / DEG) - 1 / 0.9) * DEG;
+    expect(theta.gratingLobeDb!).toBeCloseTo(0, 9);
+    expect(theta.gratingLobeOffsetDeg!).toBeCloseTo(lobeDeg - 35, 6);
+    expect(theta.peakSidelobeDb!).toBeLessThan(-12.5);
+  });
+  it('an array with no lattice (ring) reports no grating lobe; every high lobe is a sidelobe', () => {
+    const { theta } = principalPlaneMetrics(buildArrayModel({ geometry: { kind: 'circular', count: 16, radiusWavelengths: 2 } }));
+    expect(theta.gratingLobeDb).toBeUndefined();
+    expect(theta.peakSidelobeDb).toBeDefined();
+  });
+});
+
+describe('principalPlaneMetrics: beam peak offset', () => {
+  it('is exactly 0 at broadside for arrays symmetric about the normal (line, square and triangular planar, ring)', () => {
+    const specs = [
+      { geometry: { kind: 'linear', count: 16, spacingWavelengths: 0.5 } },
+      { geometry: { kind: 'planar', lattice: 'rectangular', columns: 8, rows: 8, spacingXWavelengths: 0.5 } },
+      { geometry: { kind: 'planar', lattice: 'triangular', columns: 8, rows: 8, spacingXWavelengths: 0.5 } },
+      { geometry: { kind: 'circular', count: 24, radiusWavelengths: 2 }, element: { kind: 'cosine', exponent: 1 } },
+    ] as const;
+    for (const spec of specs) {
+      const { theta, phi } = principalPlaneMetrics(buildArrayModel(spec as never));
+      expect(theta.peakOffsetDeg, spec.geometry.kind).toBe(0);
+      expect(phi.peakOffsetDeg, spec.geometry.kind).toBe(0);
+    }
+  });
+  it('is below 1e-9° for steered isotropic arrays, whose array-factor peak is exactly at θ0 (progressive phase, Mailloux §1)', () => {
+    for (const thetaDeg of [10, 30, 55]) {
+      const { theta } = principalPlaneMetrics(buildArrayModel({ geometry: { kind: 'planar', lattice: 'rectangular', columns: 12, rows: 10, spacingXWavelengths: 0.5 }, steering: { thetaDeg, phiDeg: 20 } }));
+      expect(Math.abs(theta.peakOffsetDeg), `θ0=${thetaDeg}`).toBeLessThan(1e-9);
+    }
+  });
+  it('with a cos θ element the peak is the root of the analytic pattern derivative: 6 × λ/2 line steered to 40° peaks about 2.46° toward broadside (derivative of |AF|²cos²θ written out from the Balanis §6.3 array factor, root by Brent here), within 1e-8°', () => {
+    const count = 6, x0 = Math.sin(40 / DEG);
+    const derivative = (theta: number) => {
+      const x = Math.PI * 0.5 * (Math.sin(theta) - x0), dx = Math.PI * 0.5 * Math.cos(theta);
+      const af = Math.sin(count * x) / (count * Math.sin(x));
+      const dAf = (count * Math.cos(count * x) * Math.sin(x) - Math.sin(count * x) * Math.cos(x)) / (count * Math.sin(x) ** 2);
+      return 2 * af * dAf * dx * Math.cos(theta) ** 2 - 2 * af * af * Math.cos(theta) * Math.sin(theta);
+    };
+    const peakDeg = brentRoot(derivative, 35 / DEG, 39.99 / DEG, 1e-16) * DEG;
+    const { theta } = principalPlaneMetrics(buildArrayModel({ geometry: { kind: 'linear', count, spacingWavelengths: 0.5 }, steering: { thetaDeg: 40, phiDeg: 0 }, element: { kind: 'cosine', exponent: 1 } }));
+    expect(peakDeg - 40).toBeCloseTo(-2.46, 2);
+    expect(Math.abs(theta.peakOffsetDeg - (peakDeg - 40))).toBeLessThan(1e-8);
+  });
+  it('follows the element pattern when it pulls the beam: a 4 × λ/2 line of cos θ elements steered to 50° peaks between broadside and 50°', () => {
+    const { theta } = principalPlaneMetrics(buildArrayModel({ geometry: { kind: 'linear', count: 4, spacingWavelengths: 0.5 }, steering: { thetaDeg: 50, phiDeg: 0 }, element: { kind: 'cosine', exponent: 1 } }));
+    expect(theta.peakOffsetDeg).toBeLessThan(-1);
+    expect(theta.peakOffsetDeg).toBeGreaterThan(-50);
   });
 });

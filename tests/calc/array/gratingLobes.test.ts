@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { buildArrayModel } from '../../../calc/array/buildArray';
-import { gratingLobeDirections, latticeVectorsWavelengths, reciprocalVectors } from '../../../calc/array/gratingLobes';
+import { distanceFromMainBeam, distanceToGratingLobe, gratingLobeDirections, latticeVectorsWavelengths, reciprocalVectors } from '../../../calc/array/gratingLobes';
 import { patternPowerAt } from '../../../calc/array/patternPower';
 import { directionCosines } from '../../../calc/array/steering';
 import { reciprocalRadiusFactor } from '../../../calc/gratingLobeLimit';
@@ -41,5 +41,25 @@ describe('gratingLobeDirections(vectorsWavelengths, beam)', () => {
   it('converts metres to wavelengths at the given frequency (λ = c/f)', () => {
     const [[x]] = latticeVectorsWavelengths([[0.015, 0]], 10e9);
     expect(x).toBeCloseTo(0.015 / (299_792_458 / 10e9), 12);
+  });
+});
+
+describe('distanceToGratingLobe / distanceFromMainBeam (direction cosines)', () => {
+  it('line along x, d = 1 λ at broadside: replicas at u = ±1, ±2 …; only the component along the line counts', () => {
+    const line: Array<[number, number]> = [[1, 0]];
+    expect(distanceToGratingLobe(line, [0, 0], [0.9, 0.3])).toBeCloseTo(0.1, 12);
+    expect(distanceToGratingLobe(line, [0, 0], [-1, 0])).toBeCloseTo(0, 12);
+    expect(distanceFromMainBeam(line, [0, 0], [0.2, 0.5])).toBeCloseTo(0.2, 12);
+    expect(distanceToGratingLobe(line, [0, 0], [0.2, 0])).toBeCloseTo(0.8, 12); // nearest replica u = 1, not the main beam
+  });
+  it('square lattice 0.8 λ steered to u0 = 0.5: nearest replica of (−0.7, 0.1) is (0.5 − 1.25, 0), at distance √(0.05² + 0.1²)', () => {
+    const square: Array<[number, number]> = [[0.8, 0], [0, 0.8]];
+    expect(distanceToGratingLobe(square, [0.5, 0], [-0.7, 0.1])).toBeCloseTo(Math.hypot(0.05, 0.1), 12);
+    expect(distanceFromMainBeam(square, [0.5, 0], [0.4, 0])).toBeCloseTo(0.1, 12);
+  });
+  it('lobes exactly on the horizon (u² + v² = 1) are listed: the 1 λ line at broadside has two, a 1 λ square lattice four (Mailloux §2.1)', () => {
+    expect(gratingLobeDirections([[1, 0]], { thetaDeg: 0, phiDeg: 0 }).map((l) => l.u).sort()).toEqual([-1, 1]);
+    expect(gratingLobeDirections([[1, 0], [0, 1]], { thetaDeg: 0, phiDeg: 0 })).toHaveLength(4);
+    expect(gratingLobeDirections([[0.98, 0]], { thetaDeg: 0, phiDeg: 0 })).toHaveLength(0);
   });
 });
