@@ -104,6 +104,9 @@ export interface ReflectorData {
   firstSidelobeDeg: number | null;
   /** Level of the first sidelobe relative to the peak, dB (null when it is not in visible space). */
   firstSidelobeDb: number | null;
+  /** Angle and level of the highest sidelobe (searched to u = k a sin θ = 80 or the edge of visible space). */
+  highestSidelobeDeg: number | null;
+  highestSidelobeDb: number | null;
   /** Lowest level the pattern is computed to, dB (values below are floored here). */
   patternFloorDb: number;
 }
@@ -177,13 +180,14 @@ export function computeReflector(inputs: CalcInputs): CalcResult<ReflectorData> 
   };
   const table = tabulateAperture(amplitude, innerFraction);
   const ka = Math.PI * diameterWavelengths;
-  const figures = beamFigures(table);
+  const figures = beamFigures(table, undefined, ka);
   const uToDeg = (u: number | null) => (u === null || u > ka ? null : radToDeg(Math.asin(u / ka)));
   const halfPowerDeg = figures ? uToDeg(figures.halfPowerU) : null;
   const firstNullDeg = figures ? uToDeg(figures.firstNullU) : null;
   const hpbwDeg = halfPowerDeg === null ? null : 2 * halfPowerDeg;
   const fnbwDeg = firstNullDeg === null ? null : 2 * firstNullDeg;
   const firstSidelobeDb = figures && figures.firstSidelobeU !== null && figures.firstSidelobeU <= ka ? figures.firstSidelobeDb : null;
+  const highestSidelobeDb = figures && figures.highestSidelobeU !== null && figures.highestSidelobeU <= ka ? figures.highestSidelobeDb : null;
   const uMax = Math.min(ka, figures ? 5 * figures.firstNullU : 20);
   const thetaMaxRad = Math.asin(Math.min(1, uMax / ka));
   const pattern: PatternPoint[] = [];
@@ -261,7 +265,7 @@ export function computeReflector(inputs: CalcInputs): CalcResult<ReflectorData> 
 
   // Warnings.
   if (diameterWavelengths < MIN_DIAMETER_WAVELENGTHS) {
-    warnings.push(warning('small-aperture', 'outside-validity', `The dish is only ${diameterWavelengths.toFixed(1)} wavelengths across: the aperture-field (physical-optics) model behind gain, efficiencies and pattern needs D/λ of about ${MIN_DIAMETER_WAVELENGTHS} or more, and the feed is no longer small against the dish.`, ['gainDbi', 'hpbwDeg', 'fnbwDeg', 'firstSidelobeDb', 'apertureEfficiencyPercent']));
+    warnings.push(warning('small-aperture', 'outside-validity', `The dish is only ${diameterWavelengths.toFixed(1)} wavelengths across: the aperture-field (physical-optics) model behind gain, efficiencies and pattern needs D/λ of about ${MIN_DIAMETER_WAVELENGTHS} or more, and the feed is no longer small against the dish.`, ['gainDbi', 'hpbwDeg', 'fnbwDeg', 'firstSidelobeDb', 'highestSidelobeDb', 'apertureEfficiencyPercent']));
   }
   if (focalRatio < USUAL_FOCAL_RATIO.min || focalRatio > USUAL_FOCAL_RATIO.max) {
     warnings.push(warning('unusual-focal-ratio', 'note', `f/D = ${focalRatio} is outside the usual ${USUAL_FOCAL_RATIO.min}–${USUAL_FOCAL_RATIO.max} of front-fed dishes: ${focalRatio < USUAL_FOCAL_RATIO.min ? 'a deep dish needs a very wide feed pattern, and real feeds are not cos^q ψ that far out' : 'a shallow dish needs a large, narrow-beam feed that blocks more of the aperture'}.`, ['focalRatio', 'rimHalfAngleDeg']));
@@ -270,7 +274,7 @@ export function computeReflector(inputs: CalcInputs): CalcResult<ReflectorData> 
     warnings.push(warning('large-surface-error', 'caution', `RMS surface error ${(rmsM / lambda).toFixed(3)} λ is beyond λ/16: the Ruze loss (${(-powerRatioToDb(surface)).toFixed(1)} dB) is no longer a small correction, scattered power fills the sidelobes, and the gain falls with rising frequency.`, ['surfaceEfficiencyPercent', 'surfaceDb', 'gainDbi']));
   }
   if (innerFraction > 0.25) {
-    warnings.push(warning('large-blockage', 'caution', `The central blockage is ${(innerFraction * 100).toFixed(0)} % of the diameter: the (1 − C)² estimate ignores diffraction around it, and near sidelobes rise well above the unblocked pattern.`, ['centralBlockageDb', 'firstSidelobeDb']));
+    warnings.push(warning('large-blockage', 'caution', `The central blockage is ${(innerFraction * 100).toFixed(0)} % of the diameter: the (1 − C)² estimate ignores diffraction around it, and near sidelobes rise well above the unblocked pattern.`, ['centralBlockageDb', 'firstSidelobeDb', 'highestSidelobeDb']));
   }
   if (strutFraction > 0.1) {
     warnings.push(warning('large-strut-blockage', 'note', 'Struts shading more than 10 % of the aperture: the area-fraction model ignores the spherical-wave shadow on the dish and strut scattering; the pattern omits struts.', ['strutDb']));
@@ -330,6 +334,7 @@ export function computeReflector(inputs: CalcInputs): CalcResult<ReflectorData> 
       hpbwFactorDeg: hpbwDeg === null ? null : hpbwDeg * diameterWavelengths,
       fnbwDeg,
       firstSidelobeDb,
+      highestSidelobeDb,
       optimumEdgeTaperDb: optimum.edgeTaperDb,
       optimumPowerExponent: optimum.powerExponent,
       optimumIlluminationPercent: percent(optimum.efficiency),
@@ -359,6 +364,8 @@ export function computeReflector(inputs: CalcInputs): CalcResult<ReflectorData> 
       firstNullDeg,
       firstSidelobeDeg: firstSidelobeDb === null || figures?.firstSidelobeU == null ? null : uToDeg(figures.firstSidelobeU),
       firstSidelobeDb,
+      highestSidelobeDeg: highestSidelobeDb === null || figures?.highestSidelobeU == null ? null : uToDeg(figures.highestSidelobeU),
+      highestSidelobeDb,
       patternFloorDb: PATTERN_FLOOR_DB,
     },
   };
@@ -425,7 +432,8 @@ export function createReflectorCalculator(conventions: TeamConventions): Calcula
       { key: 'hpbwDeg', label: 'Half-power beamwidth', kind: 'angle', digits: 4, description: 'Brent root of the computed pattern at −3 dB' },
       { key: 'hpbwFactorDeg', label: 'Beamwidth factor HPBW·D/λ', kind: 'angle', digits: 3, description: 'The k in HPBW ≈ k λ/D degrees' },
       { key: 'fnbwDeg', label: 'First-null beamwidth', kind: 'angle', digits: 4 },
-      { key: 'firstSidelobeDb', label: 'First sidelobe level', kind: 'decibel', digits: 3, description: 'Rotationally symmetric pattern; struts and feed scattering not included' },
+      { key: 'firstSidelobeDb', label: 'First sidelobe level', kind: 'decibel', digits: 3, description: 'First local maximum of the pattern after the first null; rotationally symmetric pattern, struts and feed scattering not included' },
+      { key: 'highestSidelobeDb', label: 'Highest sidelobe level', kind: 'decibel', digits: 3, description: 'Highest local maximum past the first null, within sin θ ≤ 80/(πD/λ) (about 25 λ/D); with a central blockage it need not be the first' },
       { key: 'optimumEdgeTaperDb', label: 'Edge taper for maximum spillover × taper at this f/D', kind: 'decibel', digits: 3 },
       { key: 'optimumPowerExponent', label: 'Feed exponent q at that optimum', kind: 'number', digits: 4 },
       { key: 'optimumIlluminationPercent', label: 'Spillover × taper at the optimum', kind: 'percent', digits: 4 },
