@@ -13,6 +13,7 @@ import { SPEED_OF_LIGHT_M_PER_S } from '../constants';
 import { freeSpaceWavelengthM } from '../wavelength';
 import { warning, type CalcWarning } from '../warnings';
 import { frequencyDefaultText } from './defaultText';
+import { circularApertureGain } from '../aperture/apertureGain';
 import {
   apertureField,
   apertureGainDbi,
@@ -160,7 +161,7 @@ export function computeReflector(inputs: CalcInputs): CalcResult<ReflectorData> 
     const unblocked = diameterForGainM(target, fixedEfficiency, lambda);
     diameterM = blockageM === 0
       ? unblocked
-      : solveDiameterForGainM(target, (d) => powerRatioToDbFloored(fixedEfficiency * centralBlockage(d) * ((Math.PI * d) / lambda) ** 2), blockageM * (1 + 1e-9), unblocked);
+      : solveDiameterForGainM(target, (d) => powerRatioToDbFloored(fixedEfficiency * centralBlockage(d) * circularApertureGain(d, lambda)), blockageM * (1 + 1e-9), unblocked);
   }
   const central = centralBlockage(diameterM);
   const apertureEfficiency = fixedEfficiency * central;
