@@ -108,6 +108,8 @@ export interface ReflectorData {
   /** Angle and level of the highest sidelobe (searched to u = k a sin θ = 80 or the edge of visible space). */
   highestSidelobeDeg: number | null;
   highestSidelobeDb: number | null;
+  /** True when the highest sidelobe is a later lobe than the first (a blockage or a strong taper can do this). */
+  highestSidelobeIsLater: boolean;
   /** Lowest level the pattern is computed to, dB (values below are floored here). */
   patternFloorDb: number;
 }
@@ -367,6 +369,7 @@ export function computeReflector(inputs: CalcInputs): CalcResult<ReflectorData> 
       firstSidelobeDb,
       highestSidelobeDeg: highestSidelobeDb === null || figures?.highestSidelobeU == null ? null : uToDeg(figures.highestSidelobeU),
       highestSidelobeDb,
+      highestSidelobeIsLater: highestSidelobeDb !== null && figures !== null && figures.highestSidelobeU !== figures.firstSidelobeU,
       patternFloorDb: PATTERN_FLOOR_DB,
     },
   };
@@ -439,19 +442,19 @@ export function createReflectorCalculator(conventions: TeamConventions): Calcula
       { key: 'optimumPowerExponent', label: 'Feed exponent q at that optimum', kind: 'number', digits: 4 },
       { key: 'optimumIlluminationPercent', label: 'Spillover × taper at the optimum', kind: 'percent', digits: 4 },
       { key: 'farFieldDistanceM', label: 'Far-field distance 2D²/λ', kind: 'length', digits: 3 },
-      { key: 'pointingTenthDbDeg', label: 'Pointing error for 0.1 dB loss', kind: 'angle', digits: 3, description: 'Gaussian-beam rule 12 (Δθ/HPBW)² dB (common practice)' },
-      { key: 'pointingOneDbDeg', label: 'Pointing error for 1 dB loss', kind: 'angle', digits: 3, description: 'Gaussian-beam rule 12 (Δθ/HPBW)² dB (common practice)' },
-      { key: 'beamDeviationFactor', label: 'Beam deviation factor (Lo)', kind: 'ratio', digits: 4 },
-      { key: 'feedOffsetM', label: 'Lateral feed offset (or feed spacing)', kind: 'length', digits: 4 },
+      { key: 'pointingTenthDbDeg', label: 'Pointing error for 0.1 dB loss', kind: 'angle', digits: 2, description: 'Gaussian-beam rule 12 (Δθ/HPBW)² dB (common practice)' },
+      { key: 'pointingOneDbDeg', label: 'Pointing error for 1 dB loss', kind: 'angle', digits: 2, description: 'Gaussian-beam rule 12 (Δθ/HPBW)² dB (common practice)' },
+      { key: 'beamDeviationFactor', label: 'Beam deviation factor (Lo)', kind: 'ratio', digits: 2, description: "Lo's approximation with k = 0.36; about 3 % from the integrated value at f/D 0.3, so two digits" },
+      { key: 'feedOffsetM', label: 'Lateral feed offset (or feed spacing)', kind: 'length', digits: 3 },
       { key: 'feedOffsetAngleDeg', label: 'Feed offset angle atan(δ/f)', kind: 'angle', digits: 4 },
-      { key: 'beamTiltDeg', label: 'Beam tilt (BDF × offset angle)', kind: 'angle', digits: 4 },
-      { key: 'beamTiltBeamwidths', label: 'Beam tilt in beamwidths', kind: 'ratio', digits: 3, unit: 'HPBW' },
+      { key: 'beamTiltDeg', label: 'Beam tilt (BDF × offset angle)', kind: 'angle', digits: 2, description: 'Two digits, as the beam deviation factor; the aperture-integration peak below is the finer figure' },
+      { key: 'beamTiltBeamwidths', label: 'Beam tilt in beamwidths', kind: 'ratio', digits: 2, unit: 'HPBW' },
       { key: 'beamPeakDeg', label: 'Beam peak by aperture integration', kind: 'angle', digits: 4, description: 'Peak of the displaced-feed pattern with the exact path-length error' },
       { key: 'scanLossDb', label: 'Scan (coma) loss at this offset', kind: 'decibel', digits: 3, description: 'Aperture integration; rough beyond about 3 beamwidths' },
-      { key: 'beamSpacingDeg', label: 'Spacing of neighbouring beams', kind: 'angle', digits: 4 },
-      { key: 'beamSpacingBeamwidths', label: 'Beam spacing in beamwidths', kind: 'ratio', digits: 3, unit: 'HPBW' },
+      { key: 'beamSpacingDeg', label: 'Spacing of neighbouring beams', kind: 'angle', digits: 2 },
+      { key: 'beamSpacingBeamwidths', label: 'Beam spacing in beamwidths', kind: 'ratio', digits: 2, unit: 'HPBW' },
       { key: 'crossoverDb', label: 'Crossover level of neighbouring beams', kind: 'decibel', digits: 3, description: 'On-axis pattern at half the beam spacing (coma neglected)' },
-      { key: 'outerBeamTiltDeg', label: 'Tilt of the outermost beam', kind: 'angle', digits: 4 },
+      { key: 'outerBeamTiltDeg', label: 'Tilt of the outermost beam', kind: 'angle', digits: 2 },
       { key: 'outerScanLossDb', label: 'Scan loss of the outermost beam', kind: 'decibel', digits: 3 },
     ],
     formulas: [
@@ -485,12 +488,12 @@ export function createReflectorCalculator(conventions: TeamConventions): Calcula
       'Safety: a transmitting dish concentrates power far along its beam, and inside 2D²/λ far-field power-density formulas do not hold; exposure is assessed under local regulations by a qualified person.',
     ],
     references: [
-      'C. A. Balanis, Antenna Theory: Analysis and Design, 4th ed., Wiley, 2016, §15.4 (front-fed paraboloid: geometry, spillover, taper and aperture efficiency).',
+      'C. A. Balanis, Antenna Theory: Analysis and Design, 4th ed., Wiley, 2016, §15.4 (section number from memory) (front-fed paraboloid: geometry, spillover, taper and aperture efficiency).',
       'J. Ruze, "Antenna tolerance theory — a review", Proc. IEEE 54(4), 1966.',
       'Y. T. Lo, "On the beam deviation factor of a parabolic reflector", IRE Trans. Antennas Propag., AP-8, 1960.',
       'J. Ruze, "Lateral-feed displacement in a paraboloid", IEEE Trans. Antennas Propag., AP-13, 1965.',
       'W. L. Stutzman and G. A. Thiele, Antenna Theory and Design, 3rd ed., Wiley, 2012 (reflector antennas, aperture blockage).',
-      'IEEE Std 145 (definitions of terms for antennas); IEEE Std 149 (test procedures for antennas, far-field distance).',
+      'IEEE Std 145 (definitions of terms for antennas); IEEE Std 149-2021, IEEE Recommended Practice for Antenna Measurements (far-field distance).',
     ],
     examples: [
       { title: 'Ground-station dish for a polar-orbit downlink, 8.2 GHz, 3.7 m, f/D 0.38', query: '?v=1&f=8.2GHz&solve=gain&d=3.7m&fd=0.38&feed=taper&et=-11dB&rms=0.6mm&blk=28cm&strut=0.025&loss=0.4dB&offby=length&off=0cm&n=1' },
