@@ -191,7 +191,8 @@ export function computeReflector(inputs: CalcInputs): CalcResult<ReflectorData> 
   const fnbwDeg = firstNullDeg === null ? null : 2 * firstNullDeg;
   const firstSidelobeDb = figures && figures.firstSidelobeU !== null && figures.firstSidelobeU <= ka ? figures.firstSidelobeDb : null;
   const highestSidelobeDb = figures && figures.highestSidelobeU !== null && figures.highestSidelobeU <= ka ? figures.highestSidelobeDb : null;
-  const uMax = Math.min(ka, figures ? 5 * figures.firstNullU : 20);
+  // Five first-null widths, and far enough to show the highest sidelobe.
+  const uMax = Math.min(ka, figures ? Math.max(5 * figures.firstNullU, 1.2 * (figures.highestSidelobeU ?? 0)) : 20);
   const thetaMaxRad = Math.asin(Math.min(1, uMax / ka));
   const pattern: PatternPoint[] = [];
   for (let i = 0; i < PATTERN_POINTS; i++) {
