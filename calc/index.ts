@@ -16,6 +16,7 @@ export * from './numeric/gaussLegendre';
 export * from './numeric/brentRoot';
 export * from './numeric/goldenMinimize';
 export * from './numeric/besselJ';
+export * from './aperture/index';
 export * from './reflector/index';
 export * from './reflectorFormulas';
 export * from './array/index';

@@ -18,6 +18,8 @@ import {
 import { REFERENCE_LEVEL_SETS, referenceLevelWPerM2 } from '../exposure/referenceLevels';
 import { warning, type CalcWarning } from '../warnings';
 import { frequencyDefaultText } from './defaultText';
+import { CalcInputError } from '../errors';
+import { apertureGainDbi, diameterForGainM, efficiencyForGain } from '../aperture/apertureGain';
 import {
   apertureExposureFormula,
   distanceToLimitFormula,
@@ -30,6 +32,9 @@ import {
 
 export const EXPOSURE_CAUTION =
   'Simplified estimate. Exposure compliance must follow the local regulations and be assessed by a qualified person, with measurement where required. Never look into or stand in front of an energised high-gain antenna.';
+
+/** Largest difference, dB, between the entered gain and η(πD/λ)² at the η entered before the page flags it. */
+export const GAIN_AGREEMENT_DB = 0.5;
 
 export interface DensityPoint {
   distanceM: number;
@@ -100,15 +105,38 @@ export function computeRangeExposure(inputs: CalcInputs): CalcResult<RangeExposu
   let apertureDistance: number | null = null;
   let surfaceDensity: number | null = null;
   let apertureDensityAtRange: number | null = null;
+  let impliedEfficiency: number | null = null;
+  let gainAtEtaDbi: number | null = null;
+  let apertureDistanceAtEta: number | null = null;
   if (dishM !== null) {
+    // One antenna description: the entered gain, with the diameter where one is given. The aperture
+    // model takes the efficiency that makes η(πD/λ)² equal the entered gain.
+    const uniformGainDbi = apertureGainDbi(1, dishM, lambda);
+    if (gt > uniformGainDbi) {
+      throw new CalcInputError(
+        'apertureDiameterM',
+        `expected at least ${diameterForGainM(gt, 1, lambda).toPrecision(3)} m: a ${dishM} m aperture gives at most ${uniformGainDbi.toFixed(2)} dBi at this frequency (η = 1), less than the ${gt} dBi entered as transmit gain; got ${dishM} m`,
+      );
+    }
+    impliedEfficiency = Math.min(1, efficiencyForGain(gt, dishM, lambda));
+    gainAtEtaDbi = apertureGainDbi(eta, dishM, lambda);
     farFieldBoundary = farFieldBoundaryM(dishM, f);
-    apertureDistance = apertureDistanceToLimitM(ptW, dishM, eta, f, limit);
-    surfaceDensity = apertureNearFieldZones(ptW, dishM, eta, f).surfaceDensityWPerM2;
-    apertureDensityAtRange = apertureOnAxisPowerDensityWPerM2(ptW, dishM, eta, f, rangeM);
-    const apertureGainDbi = 10 * Math.log10(eta * ((Math.PI * dishM) / lambda) ** 2);
-    if (Math.abs(apertureGainDbi - gt) > 3) {
+    apertureDistance = apertureDistanceToLimitM(ptW, dishM, impliedEfficiency, f, limit);
+    apertureDistanceAtEta = apertureDistanceToLimitM(ptW, dishM, eta, f, limit);
+    surfaceDensity = apertureNearFieldZones(ptW, dishM, impliedEfficiency, f).surfaceDensityWPerM2;
+    apertureDensityAtRange = apertureOnAxisPowerDensityWPerM2(ptW, dishM, impliedEfficiency, f, rangeM);
+    const differenceDb = gainAtEtaDbi - gt;
+    if (Math.abs(differenceDb) > GAIN_AGREEMENT_DB) {
+      const direction = differenceDb > 0 ? 'more' : 'less';
       warnings.push(
-        warning('gain-aperture-mismatch', 'note', `The aperture (${dishM} m at η = ${eta}) gives ${apertureGainDbi.toFixed(1)} dBi, not the ${gt} dBi entered as transmit gain; the aperture model uses the aperture.`, ['apertureDistanceToLimitM']),
+        warning(
+          'gain-aperture-mismatch',
+          differenceDb > 0 ? 'caution' : 'note',
+          `The ${dishM} m aperture at η = ${eta} would give ${gainAtEtaDbi.toFixed(1)} dBi, ${Math.abs(differenceDb).toFixed(1)} dB ${direction} than the ${gt} dBi entered as transmit gain (this page flags differences above ${GAIN_AGREEMENT_DB} dB). ` +
+            `EIRP, link and both exposure models use the entered gain (the aperture model with the efficiency it implies, η = ${impliedEfficiency.toPrecision(2)}), so every figure describes one antenna; ` +
+            `with η = ${eta} the aperture-model distance to the limit would be ${apertureDistanceAtEta.toPrecision(3)} m instead of ${apertureDistance.toPrecision(3)} m. Check which of gain, diameter and efficiency is right.`,
+          ['transmitGainDbi', 'impliedEfficiencyPercent', 'apertureGainAtEtaDbi', 'apertureDistanceToLimitM', 'apertureDistanceToLimitAtEtaM'],
+        ),
       );
     }
     if (distanceToLimit < farFieldBoundary) {
@@ -134,7 +162,7 @@ export function computeRangeExposure(inputs: CalcInputs): CalcResult<RangeExposu
     density.push({
       distanceM: r,
       farFieldWPerM2: farFieldPowerDensityWPerM2(eirp, r),
-      apertureModelWPerM2: dishM === null ? null : apertureOnAxisPowerDensityWPerM2(ptW, dishM, eta, f, r),
+      apertureModelWPerM2: dishM === null || impliedEfficiency === null ? null : apertureOnAxisPowerDensityWPerM2(ptW, dishM, impliedEfficiency, f, r),
     });
   }
 
@@ -158,6 +186,9 @@ export function computeRangeExposure(inputs: CalcInputs): CalcResult<RangeExposu
       apertureDistanceToLimitM: apertureDistance,
       farFieldBoundaryM: farFieldBoundary,
       surfaceDensityWPerM2: surfaceDensity,
+      impliedEfficiencyPercent: impliedEfficiency === null ? null : 100 * impliedEfficiency,
+      apertureGainAtEtaDbi: gainAtEtaDbi,
+      apertureDistanceToLimitAtEtaM: apertureDistanceAtEta,
     },
     warnings,
     data: { density, limitWPerM2: limit, limitLabel, sizingGainDbi: mode === 'gain' ? requiredTxGainDbi : gt, frequencyHz: f },
@@ -182,8 +213,8 @@ export function createRangeExposureCalculator(conventions: TeamConventions): Cal
       { kind: 'power', key: 'preq', name: 'requiredPowerW', label: 'Required received power (sensitivity + margin)', defaultText: '-90 dBm', min: 1e-25, max: 1e3, minExclusive: true, description: 'Receiver sensitivity plus the fade margin you hold, e.g. −90 dBm.' },
       { kind: 'decibel', key: 'loss', name: 'otherLossDb', label: 'Other losses', defaultText: '3 dB', min: 0, max: 200, description: 'Pointing, polarization, radome and atmospheric losses, positive dB.' },
       { kind: 'length', key: 'r', name: 'rangeM', label: 'Range (link distance)', defaultText: '20 km', min: 1e-3, max: 1e12, description: 'Distance for the received power, the gain needed, and the density readout.' },
-      { kind: 'length', key: 'dant', name: 'apertureDiameterM', label: 'Transmit aperture diameter', defaultText: '', min: 1e-3, max: 1e3, optional: true, wavelengthFrom: 'design', description: 'Optional. For the far-field boundary 2D²/λ and the near-field density bound.' },
-      { kind: 'number', key: 'eta', name: 'apertureEfficiency', label: 'Aperture efficiency η', defaultText: String(conventions.efficiencies.reflectorAperture), min: 0.01, max: 1, description: 'For the aperture model (team default from the conventions).' },
+      { kind: 'length', key: 'dant', name: 'apertureDiameterM', label: 'Transmit aperture diameter', defaultText: '', min: 1e-3, max: 1e3, optional: true, wavelengthFrom: 'design', description: 'Optional. For the far-field boundary 2D²/λ and the near-field density bound; with the entered gain it fixes the aperture efficiency the near-field model uses.' },
+      { kind: 'number', key: 'eta', name: 'apertureEfficiency', label: 'Aperture efficiency η expected (cross-check of the gain)', defaultText: String(conventions.efficiencies.reflectorAperture), min: 0.01, max: 1, description: 'Used only with a diameter, to cross-check the entered gain: the page shows η(πD/λ)² and the aperture-model distance at this η beside the results from the entered gain, and flags a difference above 0.5 dB (team default from the conventions).' },
       {
         kind: 'choice',
         key: 'lim',
@@ -217,6 +248,9 @@ export function createRangeExposureCalculator(conventions: TeamConventions): Cal
       { key: 'apertureDistanceToLimitM', label: 'Distance to the limit (aperture model, conservative)', kind: 'length', digits: 3 },
       { key: 'farFieldBoundaryM', label: 'Far-field boundary 2D²/λ', kind: 'length', digits: 4 },
       { key: 'surfaceDensityWPerM2', label: 'Density bound at the aperture surface 4P/A', kind: 'powerDensity', digits: 3 },
+      { key: 'impliedEfficiencyPercent', label: 'Aperture efficiency implied by the entered gain and diameter', kind: 'percent', digits: 3, description: 'G/(πD/λ)²: the efficiency the aperture model uses, so that it describes the same antenna as the EIRP' },
+      { key: 'apertureGainAtEtaDbi', label: 'Cross-check: gain of the diameter at the η entered', kind: 'decibel', digits: 3, unit: 'dBi', description: 'η(πD/λ)²; flagged when it differs from the entered gain by more than 0.5 dB' },
+      { key: 'apertureDistanceToLimitAtEtaM', label: 'Cross-check: distance to the limit (aperture model at the η entered)', kind: 'length', digits: 3, description: 'The aperture model with the diameter and η as entered instead of the entered gain' },
     ],
     formulas: [
       {
@@ -244,7 +278,7 @@ export function createRangeExposureCalculator(conventions: TeamConventions): Cal
         args: (i, v) =>
           i.apertureDiameterM === null
             ? null
-            : { transmitPowerW: i.transmitPowerW as number, apertureDiameterM: i.apertureDiameterM as number, apertureEfficiency: i.apertureEfficiency as number, frequencyHz: i.frequencyHz as number, limitWPerM2: v.limitWPerM2 as number },
+            : { transmitPowerW: i.transmitPowerW as number, apertureDiameterM: i.apertureDiameterM as number, apertureEfficiency: (v.impliedEfficiencyPercent as number) / 100, frequencyHz: i.frequencyHz as number, limitWPerM2: v.limitWPerM2 as number },
       },
       { formula: farFieldBoundaryFormula, output: 'farFieldBoundaryM', args: (i) => (i.apertureDiameterM === null ? null : { apertureDiameterM: i.apertureDiameterM as number, frequencyHz: i.frequencyHz as number }) },
     ],
@@ -253,6 +287,7 @@ export function createRangeExposureCalculator(conventions: TeamConventions): Cal
       'Both antennas are in each other’s far field and point at each other; polarization mismatch belongs in “other losses”.',
       'Power densities are on the beam axis, time-averaged at full power (no duty-cycle reduction). Ground reflections can raise the density up to fourfold near the ground.',
       'The aperture model is a conservative estimate for circular apertures; it is not a field computation and is not a compliance assessment.',
+      'One antenna description: the transmit antenna is its entered gain. With a diameter, the aperture model uses the efficiency that gain implies, η = G/(πD/λ)², so the EIRP, the far-field formula and the aperture model describe one antenna (beyond 0.6 D²/λ the two models then agree). The η field only cross-checks: the gain η(πD/λ)² and the aperture-model distance at that η are shown beside, and a difference above 0.5 dB from the entered gain is flagged (0.5 dB is about 12 % in power density; common practice, no source). A gain above what the diameter gives at η = 1 is rejected.',
       'The reference-level table is for orientation only: limits, averaging times and the way they are applied differ by country and change over time.',
       EXPOSURE_CAUTION,
     ],
@@ -264,7 +299,7 @@ export function createRangeExposureCalculator(conventions: TeamConventions): Cal
       'US Code of Federal Regulations, 47 CFR §1.1310, Radiofrequency radiation exposure limits.',
     ],
     examples: [
-      { title: 'Mountain-hut telemetry hop, 5.8 GHz, 1 W, 27 dBi dishes, −85 dBm needed', query: '?v=1&f=5.8GHz&solve=range&pt=1W&gt=27dBi&gr=27dBi&preq=-85dBm&loss=4dB&r=35km&dant=0.6m&eta=0.55&lim=icnirp2020-public' },
+      { title: 'Mountain-hut telemetry hop, 5.8 GHz, 1 W, 27 dBi dishes of 0.6 m (η ≈ 0.4), −85 dBm needed', query: '?v=1&f=5.8GHz&solve=range&pt=1W&gt=27dBi&gr=27dBi&preq=-85dBm&loss=4dB&r=35km&dant=0.6m&eta=0.4&lim=icnirp2020-public' },
       { title: 'Gain needed for a 120 km ship-to-shore link at 2.2 GHz', query: '?v=1&f=2.2GHz&solve=gain&pt=20W&gt=18dBi&gr=24dBi&preq=-100dBm&loss=6dB&r=120km&eta=0.6&lim=icnirp2020-occupational' },
     ],
     sourcePath: 'calc/calculators/rangeExposure.ts',

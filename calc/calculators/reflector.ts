@@ -13,6 +13,7 @@ import { SPEED_OF_LIGHT_M_PER_S } from '../constants';
 import { freeSpaceWavelengthM } from '../wavelength';
 import { warning, type CalcWarning } from '../warnings';
 import { frequencyDefaultText } from './defaultText';
+import { circularApertureGain } from '../aperture/apertureGain';
 import {
   apertureField,
   apertureGainDbi,
@@ -104,6 +105,11 @@ export interface ReflectorData {
   firstSidelobeDeg: number | null;
   /** Level of the first sidelobe relative to the peak, dB (null when it is not in visible space). */
   firstSidelobeDb: number | null;
+  /** Angle and level of the highest sidelobe (searched to u = k a sin θ = 80 or the edge of visible space). */
+  highestSidelobeDeg: number | null;
+  highestSidelobeDb: number | null;
+  /** True when the highest sidelobe is a later lobe than the first (a blockage or a strong taper can do this). */
+  highestSidelobeIsLater: boolean;
   /** Lowest level the pattern is computed to, dB (values below are floored here). */
   patternFloorDb: number;
 }
@@ -157,7 +163,7 @@ export function computeReflector(inputs: CalcInputs): CalcResult<ReflectorData> 
     const unblocked = diameterForGainM(target, fixedEfficiency, lambda);
     diameterM = blockageM === 0
       ? unblocked
-      : solveDiameterForGainM(target, (d) => powerRatioToDbFloored(fixedEfficiency * centralBlockage(d) * ((Math.PI * d) / lambda) ** 2), blockageM * (1 + 1e-9), unblocked);
+      : solveDiameterForGainM(target, (d) => powerRatioToDbFloored(fixedEfficiency * centralBlockage(d) * circularApertureGain(d, lambda)), blockageM * (1 + 1e-9), unblocked);
   }
   const central = centralBlockage(diameterM);
   const apertureEfficiency = fixedEfficiency * central;
@@ -177,14 +183,16 @@ export function computeReflector(inputs: CalcInputs): CalcResult<ReflectorData> 
   };
   const table = tabulateAperture(amplitude, innerFraction);
   const ka = Math.PI * diameterWavelengths;
-  const figures = beamFigures(table);
+  const figures = beamFigures(table, undefined, ka);
   const uToDeg = (u: number | null) => (u === null || u > ka ? null : radToDeg(Math.asin(u / ka)));
   const halfPowerDeg = figures ? uToDeg(figures.halfPowerU) : null;
   const firstNullDeg = figures ? uToDeg(figures.firstNullU) : null;
   const hpbwDeg = halfPowerDeg === null ? null : 2 * halfPowerDeg;
   const fnbwDeg = firstNullDeg === null ? null : 2 * firstNullDeg;
   const firstSidelobeDb = figures && figures.firstSidelobeU !== null && figures.firstSidelobeU <= ka ? figures.firstSidelobeDb : null;
-  const uMax = Math.min(ka, figures ? 5 * figures.firstNullU : 20);
+  const highestSidelobeDb = figures && figures.highestSidelobeU !== null && figures.highestSidelobeU <= ka ? figures.highestSidelobeDb : null;
+  // Five first-null widths, and far enough to show the highest sidelobe.
+  const uMax = Math.min(ka, figures ? Math.max(5 * figures.firstNullU, 1.2 * (figures.highestSidelobeU ?? 0)) : 20);
   const thetaMaxRad = Math.asin(Math.min(1, uMax / ka));
   const pattern: PatternPoint[] = [];
   for (let i = 0; i < PATTERN_POINTS; i++) {
@@ -261,7 +269,7 @@ export function computeReflector(inputs: CalcInputs): CalcResult<ReflectorData> 
 
   // Warnings.
   if (diameterWavelengths < MIN_DIAMETER_WAVELENGTHS) {
-    warnings.push(warning('small-aperture', 'outside-validity', `The dish is only ${diameterWavelengths.toFixed(1)} wavelengths across: the aperture-field (physical-optics) model behind gain, efficiencies and pattern needs D/λ of about ${MIN_DIAMETER_WAVELENGTHS} or more, and the feed is no longer small against the dish.`, ['gainDbi', 'hpbwDeg', 'fnbwDeg', 'firstSidelobeDb', 'apertureEfficiencyPercent']));
+    warnings.push(warning('small-aperture', 'outside-validity', `The dish is only ${diameterWavelengths.toFixed(1)} wavelengths across: the aperture-field (physical-optics) model behind gain, efficiencies and pattern needs D/λ of about ${MIN_DIAMETER_WAVELENGTHS} or more, and the feed is no longer small against the dish.`, ['gainDbi', 'hpbwDeg', 'fnbwDeg', 'firstSidelobeDb', 'highestSidelobeDb', 'apertureEfficiencyPercent']));
   }
   if (focalRatio < USUAL_FOCAL_RATIO.min || focalRatio > USUAL_FOCAL_RATIO.max) {
     warnings.push(warning('unusual-focal-ratio', 'note', `f/D = ${focalRatio} is outside the usual ${USUAL_FOCAL_RATIO.min}–${USUAL_FOCAL_RATIO.max} of front-fed dishes: ${focalRatio < USUAL_FOCAL_RATIO.min ? 'a deep dish needs a very wide feed pattern, and real feeds are not cos^q ψ that far out' : 'a shallow dish needs a large, narrow-beam feed that blocks more of the aperture'}.`, ['focalRatio', 'rimHalfAngleDeg']));
@@ -270,7 +278,7 @@ export function computeReflector(inputs: CalcInputs): CalcResult<ReflectorData> 
     warnings.push(warning('large-surface-error', 'caution', `RMS surface error ${(rmsM / lambda).toFixed(3)} λ is beyond λ/16: the Ruze loss (${(-powerRatioToDb(surface)).toFixed(1)} dB) is no longer a small correction, scattered power fills the sidelobes, and the gain falls with rising frequency.`, ['surfaceEfficiencyPercent', 'surfaceDb', 'gainDbi']));
   }
   if (innerFraction > 0.25) {
-    warnings.push(warning('large-blockage', 'caution', `The central blockage is ${(innerFraction * 100).toFixed(0)} % of the diameter: the (1 − C)² estimate ignores diffraction around it, and near sidelobes rise well above the unblocked pattern.`, ['centralBlockageDb', 'firstSidelobeDb']));
+    warnings.push(warning('large-blockage', 'caution', `The central blockage is ${(innerFraction * 100).toFixed(0)} % of the diameter: the (1 − C)² estimate ignores diffraction around it, and near sidelobes rise well above the unblocked pattern.`, ['centralBlockageDb', 'firstSidelobeDb', 'highestSidelobeDb']));
   }
   if (strutFraction > 0.1) {
     warnings.push(warning('large-strut-blockage', 'note', 'Struts shading more than 10 % of the aperture: the area-fraction model ignores the spherical-wave shadow on the dish and strut scattering; the pattern omits struts.', ['strutDb']));
@@ -330,6 +338,7 @@ export function computeReflector(inputs: CalcInputs): CalcResult<ReflectorData> 
       hpbwFactorDeg: hpbwDeg === null ? null : hpbwDeg * diameterWavelengths,
       fnbwDeg,
       firstSidelobeDb,
+      highestSidelobeDb,
       optimumEdgeTaperDb: optimum.edgeTaperDb,
       optimumPowerExponent: optimum.powerExponent,
       optimumIlluminationPercent: percent(optimum.efficiency),
@@ -359,6 +368,9 @@ export function computeReflector(inputs: CalcInputs): CalcResult<ReflectorData> 
       firstNullDeg,
       firstSidelobeDeg: firstSidelobeDb === null || figures?.firstSidelobeU == null ? null : uToDeg(figures.firstSidelobeU),
       firstSidelobeDb,
+      highestSidelobeDeg: highestSidelobeDb === null || figures?.highestSidelobeU == null ? null : uToDeg(figures.highestSidelobeU),
+      highestSidelobeDb,
+      highestSidelobeIsLater: highestSidelobeDb !== null && figures !== null && figures.highestSidelobeU !== figures.firstSidelobeU,
       patternFloorDb: PATTERN_FLOOR_DB,
     },
   };
@@ -425,24 +437,25 @@ export function createReflectorCalculator(conventions: TeamConventions): Calcula
       { key: 'hpbwDeg', label: 'Half-power beamwidth', kind: 'angle', digits: 4, description: 'Brent root of the computed pattern at −3 dB' },
       { key: 'hpbwFactorDeg', label: 'Beamwidth factor HPBW·D/λ', kind: 'angle', digits: 3, description: 'The k in HPBW ≈ k λ/D degrees' },
       { key: 'fnbwDeg', label: 'First-null beamwidth', kind: 'angle', digits: 4 },
-      { key: 'firstSidelobeDb', label: 'First sidelobe level', kind: 'decibel', digits: 3, description: 'Rotationally symmetric pattern; struts and feed scattering not included' },
+      { key: 'firstSidelobeDb', label: 'First sidelobe level', kind: 'decibel', digits: 3, description: 'First local maximum of the pattern after the first null; rotationally symmetric pattern, struts and feed scattering not included' },
+      { key: 'highestSidelobeDb', label: 'Highest sidelobe level', kind: 'decibel', digits: 3, description: 'Highest local maximum past the first null, within sin θ ≤ 80/(πD/λ) (about 25 λ/D); with a central blockage it need not be the first' },
       { key: 'optimumEdgeTaperDb', label: 'Edge taper for maximum spillover × taper at this f/D', kind: 'decibel', digits: 3 },
       { key: 'optimumPowerExponent', label: 'Feed exponent q at that optimum', kind: 'number', digits: 4 },
       { key: 'optimumIlluminationPercent', label: 'Spillover × taper at the optimum', kind: 'percent', digits: 4 },
       { key: 'farFieldDistanceM', label: 'Far-field distance 2D²/λ', kind: 'length', digits: 3 },
-      { key: 'pointingTenthDbDeg', label: 'Pointing error for 0.1 dB loss', kind: 'angle', digits: 3, description: 'Gaussian-beam rule 12 (Δθ/HPBW)² dB (common practice)' },
-      { key: 'pointingOneDbDeg', label: 'Pointing error for 1 dB loss', kind: 'angle', digits: 3, description: 'Gaussian-beam rule 12 (Δθ/HPBW)² dB (common practice)' },
-      { key: 'beamDeviationFactor', label: 'Beam deviation factor (Lo)', kind: 'ratio', digits: 4 },
-      { key: 'feedOffsetM', label: 'Lateral feed offset (or feed spacing)', kind: 'length', digits: 4 },
+      { key: 'pointingTenthDbDeg', label: 'Pointing error for 0.1 dB loss', kind: 'angle', digits: 2, description: 'Gaussian-beam rule 12 (Δθ/HPBW)² dB (common practice)' },
+      { key: 'pointingOneDbDeg', label: 'Pointing error for 1 dB loss', kind: 'angle', digits: 2, description: 'Gaussian-beam rule 12 (Δθ/HPBW)² dB (common practice)' },
+      { key: 'beamDeviationFactor', label: 'Beam deviation factor (Lo)', kind: 'ratio', digits: 2, description: "Lo's approximation with k = 0.36; about 3 % from the integrated value at f/D 0.3, so two digits" },
+      { key: 'feedOffsetM', label: 'Lateral feed offset (or feed spacing)', kind: 'length', digits: 3 },
       { key: 'feedOffsetAngleDeg', label: 'Feed offset angle atan(δ/f)', kind: 'angle', digits: 4 },
-      { key: 'beamTiltDeg', label: 'Beam tilt (BDF × offset angle)', kind: 'angle', digits: 4 },
-      { key: 'beamTiltBeamwidths', label: 'Beam tilt in beamwidths', kind: 'ratio', digits: 3, unit: 'HPBW' },
+      { key: 'beamTiltDeg', label: 'Beam tilt (BDF × offset angle)', kind: 'angle', digits: 2, description: 'Two digits, as the beam deviation factor; the aperture-integration peak below is the finer figure' },
+      { key: 'beamTiltBeamwidths', label: 'Beam tilt in beamwidths', kind: 'ratio', digits: 2, unit: 'HPBW' },
       { key: 'beamPeakDeg', label: 'Beam peak by aperture integration', kind: 'angle', digits: 4, description: 'Peak of the displaced-feed pattern with the exact path-length error' },
       { key: 'scanLossDb', label: 'Scan (coma) loss at this offset', kind: 'decibel', digits: 3, description: 'Aperture integration; rough beyond about 3 beamwidths' },
-      { key: 'beamSpacingDeg', label: 'Spacing of neighbouring beams', kind: 'angle', digits: 4 },
-      { key: 'beamSpacingBeamwidths', label: 'Beam spacing in beamwidths', kind: 'ratio', digits: 3, unit: 'HPBW' },
+      { key: 'beamSpacingDeg', label: 'Spacing of neighbouring beams', kind: 'angle', digits: 2 },
+      { key: 'beamSpacingBeamwidths', label: 'Beam spacing in beamwidths', kind: 'ratio', digits: 2, unit: 'HPBW' },
       { key: 'crossoverDb', label: 'Crossover level of neighbouring beams', kind: 'decibel', digits: 3, description: 'On-axis pattern at half the beam spacing (coma neglected)' },
-      { key: 'outerBeamTiltDeg', label: 'Tilt of the outermost beam', kind: 'angle', digits: 4 },
+      { key: 'outerBeamTiltDeg', label: 'Tilt of the outermost beam', kind: 'angle', digits: 2 },
       { key: 'outerScanLossDb', label: 'Scan loss of the outermost beam', kind: 'decibel', digits: 3 },
     ],
     formulas: [
@@ -476,12 +489,12 @@ export function createReflectorCalculator(conventions: TeamConventions): Calcula
       'Safety: a transmitting dish concentrates power far along its beam, and inside 2D²/λ far-field power-density formulas do not hold; exposure is assessed under local regulations by a qualified person.',
     ],
     references: [
-      'C. A. Balanis, Antenna Theory: Analysis and Design, 4th ed., Wiley, 2016, §15.4 (front-fed paraboloid: geometry, spillover, taper and aperture efficiency).',
+      'C. A. Balanis, Antenna Theory: Analysis and Design, 4th ed., Wiley, 2016, §15.4 (section number from memory) (front-fed paraboloid: geometry, spillover, taper and aperture efficiency).',
       'J. Ruze, "Antenna tolerance theory — a review", Proc. IEEE 54(4), 1966.',
       'Y. T. Lo, "On the beam deviation factor of a parabolic reflector", IRE Trans. Antennas Propag., AP-8, 1960.',
       'J. Ruze, "Lateral-feed displacement in a paraboloid", IEEE Trans. Antennas Propag., AP-13, 1965.',
       'W. L. Stutzman and G. A. Thiele, Antenna Theory and Design, 3rd ed., Wiley, 2012 (reflector antennas, aperture blockage).',
-      'IEEE Std 145 (definitions of terms for antennas); IEEE Std 149 (test procedures for antennas, far-field distance).',
+      'IEEE Std 145 (definitions of terms for antennas); IEEE Std 149-2021, IEEE Recommended Practice for Antenna Measurements (far-field distance).',
     ],
     examples: [
       { title: 'Ground-station dish for a polar-orbit downlink, 8.2 GHz, 3.7 m, f/D 0.38', query: '?v=1&f=8.2GHz&solve=gain&d=3.7m&fd=0.38&feed=taper&et=-11dB&rms=0.6mm&blk=28cm&strut=0.025&loss=0.4dB&offby=length&off=0cm&n=1' },

@@ -1,5 +1,7 @@
 import { requireInRange, requireNonNegative, requirePositive } from '../errors';
 import { freeSpaceWavelengthM } from '../wavelength';
+import { circularApertureGain } from '../aperture/apertureGain';
+import { farFieldDistanceM } from '../aperture/farFieldDistance';
 
 /** EIRP in watts: transmit power × linear gain (gain in dBi, net of feed losses). */
 export function eirpW(transmitPowerW: number, gainDbi: number, lossDb = 0): number {
@@ -23,10 +25,10 @@ export function farFieldDistanceToLimitM(eirpWatts: number, limitWPerM2: number)
   return Math.sqrt(eirpWatts / (4 * Math.PI * limitWPerM2));
 }
 
-/** Far-field boundary of an aperture, m: 2D²/λ. */
+/** Far-field boundary of an aperture, m: 2D²/λ (calc/aperture/farFieldDistance.ts), from the frequency. */
 export function farFieldBoundaryM(apertureDiameterM: number, frequencyHz: number): number {
   requirePositive('apertureDiameterM', apertureDiameterM, 'm');
-  return (2 * apertureDiameterM * apertureDiameterM) / freeSpaceWavelengthM(frequencyHz);
+  return farFieldDistanceM(apertureDiameterM, freeSpaceWavelengthM(frequencyHz));
 }
 
 /**
@@ -47,13 +49,13 @@ export function apertureOnAxisPowerDensityWPerM2(
 ): number {
   requirePositive('transmitPowerW', transmitPowerW, 'W');
   requirePositive('apertureDiameterM', apertureDiameterM, 'm');
-  requireInRange('apertureEfficiency', apertureEfficiency, 0.01, 1);
+  requireInRange('apertureEfficiency', apertureEfficiency, Number.MIN_VALUE, 1);
   requirePositive('distanceM', distanceM, 'm');
   const { nearFieldExtentM, farFieldStartM, nearFieldDensityWPerM2 } = apertureNearFieldZones(transmitPowerW, apertureDiameterM, apertureEfficiency, frequencyHz);
   if (distanceM <= nearFieldExtentM) return nearFieldDensityWPerM2;
   if (distanceM < farFieldStartM) return (nearFieldDensityWPerM2 * nearFieldExtentM) / distanceM;
   const lambda = freeSpaceWavelengthM(frequencyHz);
-  const gain = apertureEfficiency * ((Math.PI * apertureDiameterM) / lambda) ** 2;
+  const gain = circularApertureGain(apertureDiameterM, lambda, apertureEfficiency);
   return (transmitPowerW * gain) / (4 * Math.PI * distanceM * distanceM);
 }
 
@@ -88,6 +90,6 @@ export function apertureDistanceToLimitM(
   const transitionDistance = (zones.nearFieldDensityWPerM2 * zones.nearFieldExtentM) / limitWPerM2;
   if (transitionDistance < zones.farFieldStartM) return transitionDistance;
   const lambda = freeSpaceWavelengthM(frequencyHz);
-  const gain = apertureEfficiency * ((Math.PI * apertureDiameterM) / lambda) ** 2;
+  const gain = circularApertureGain(apertureDiameterM, lambda, apertureEfficiency);
   return Math.max(zones.farFieldStartM, Math.sqrt((transmitPowerW * gain) / (4 * Math.PI * limitWPerM2)));
 }

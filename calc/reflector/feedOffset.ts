@@ -65,7 +65,11 @@ export interface DisplacedFeedBeam {
 /**
  * Beam peak and scan loss of a laterally displaced feed, by a two-dimensional aperture
  * integration (radial 16×`radialPanels` Gauss–Legendre nodes, azimuthal 32 over half the circle,
- * using the symmetry of the scan plane). The search spans ±0.8 λ/D around Lo's prediction.
+ * using the symmetry of the scan plane). The peak is searched around Lo's prediction in a window
+ * of ±max(0.8 λ/D, half the predicted tilt), sampled every 0.1 λ/D, which doubles while the best
+ * sample sits at its edge: far off axis the true peak lies several λ/D beyond Lo's prediction
+ * (at f/D 0.3 and 12 beamwidths, 4° beyond 15.8°), and a narrow window reports its own edge or a
+ * coma lobe instead.
  */
 export function displacedFeedBeam(inputs: DisplacedFeedInputs, radialPanels = 3): DisplacedFeedBeam {
   const { diameterWavelengths, focalRatio, powerExponent, blockedDiameterFraction, offsetWavelengths } = inputs;
@@ -120,10 +124,39 @@ export function displacedFeedBeam(inputs: DisplacedFeedInputs, radialPanels = 3)
   if (delta === 0) return { peakTiltRad: 0, scanLossDb: 0 };
   const predicted = loBeamDeviationFactor(focalRatio) * Math.atan(delta / f);
   const sPredicted = -Math.sin(Math.min(predicted, Math.PI / 2));
-  const span = 0.8 / diameterWavelengths;
-  const lo = Math.max(-1, sPredicted - span);
-  const hi = Math.min(1, sPredicted + span);
-  const sPeak = scanThenMinimize((s) => -power(s), lo, hi, 12, 1e-4 / diameterWavelengths);
+  const sampleStep = SEARCH_STEP_LAMBDA_OVER_D / diameterWavelengths;
+  const halfWidth = Math.max(MIN_HALF_WINDOW_LAMBDA_OVER_D / diameterWavelengths, HALF_WINDOW_FRACTION_OF_TILT * Math.abs(sPredicted));
+  const sPeak = peakInWidenedWindow(power, sPredicted, halfWidth, sampleStep, 1e-4 / diameterWavelengths);
   const peak = power(sPeak);
   return { peakTiltRad: Math.asin(-sPeak), scanLossDb: Math.max(0, -10 * Math.log10(peak)) };
+}
+
+/** Smallest half-width of the search window around Lo's prediction, in λ/D. */
+const MIN_HALF_WINDOW_LAMBDA_OVER_D = 0.8;
+/** Half-width of the search window as a fraction of the predicted tilt (in sin θ). */
+const HALF_WINDOW_FRACTION_OF_TILT = 0.5;
+/** Sampling step of the search, in λ/D (about a twelfth of a beamwidth). */
+const SEARCH_STEP_LAMBDA_OVER_D = 0.1;
+
+/**
+ * Maximum of power(s) for s = sin θ in [−1, 1]: power is sampled every `step` in the window
+ * sCentre ± halfWidth, the best sample refined by golden-section search; the window doubles while
+ * the best sample sits at an edge that is not the edge of visible space. Returns s of the maximum.
+ */
+export function peakInWidenedWindow(power: (s: number) => number, sCentre: number, halfWidth: number, step: number, tolerance: number): number {
+  requireInRange('sCentre', sCentre, -1, 1);
+  requirePositive('halfWidth', halfWidth);
+  requirePositive('step', step);
+  let width = halfWidth;
+  for (;;) {
+    const lo = Math.max(-1, sCentre - width);
+    const hi = Math.min(1, sCentre + width);
+    const samples = Math.max(2, Math.ceil((hi - lo) / step));
+    const actualStep = (hi - lo) / samples;
+    const s = scanThenMinimize((x) => -power(x), lo, hi, samples, tolerance);
+    const clippedLow = lo > -1 && s - lo < actualStep;
+    const clippedHigh = hi < 1 && hi - s < actualStep;
+    if ((!clippedLow && !clippedHigh) || (lo === -1 && hi === 1)) return s;
+    width *= 2;
+  }
 }

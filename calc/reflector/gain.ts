@@ -1,26 +1,12 @@
 /**
- * Gain of a circular aperture: G = η (πD/λ)² (IEEE Std 145 definitions; Balanis, Antenna Theory,
- * 4th ed., §15.4.1), and its inverse for the diameter.
+ * Gain of a circular aperture, G = η (πD/λ)², and its inverse for the diameter: the relation lives
+ * in calc/aperture/apertureGain.ts and is re-exported here for the reflector's callers; this file
+ * adds the diameter solve for efficiencies that depend on D.
  */
 import { requireInRange, requirePositive, CalcInputError } from '../errors';
 import { brentRoot } from '../numeric/brentRoot';
 
-/** Gain in dBi of a circular aperture of diameter D with aperture efficiency η at wavelength λ. */
-export function apertureGainDbi(apertureEfficiency: number, diameterM: number, wavelengthM: number): number {
-  requireInRange('apertureEfficiency', apertureEfficiency, Number.MIN_VALUE, 1);
-  requirePositive('diameterM', diameterM, 'm');
-  requirePositive('wavelengthM', wavelengthM, 'm');
-  const x = (Math.PI * diameterM) / wavelengthM;
-  return 10 * Math.log10(apertureEfficiency * x * x);
-}
-
-/** Diameter in metres giving gain G (dBi) at a fixed efficiency: D = (λ/π)·√(G/η). */
-export function diameterForGainM(gainDbi: number, apertureEfficiency: number, wavelengthM: number): number {
-  requireInRange('gainDbi', gainDbi, -100, 200, 'dBi');
-  requireInRange('apertureEfficiency', apertureEfficiency, Number.MIN_VALUE, 1);
-  requirePositive('wavelengthM', wavelengthM, 'm');
-  return (wavelengthM / Math.PI) * Math.sqrt(10 ** (gainDbi / 10) / apertureEfficiency);
-}
+export { apertureGainDbi, diameterForGainM } from '../aperture/apertureGain';
 
 /**
  * Diameter (m) at which gainOfDiameter(D) (dBi, increasing in D) reaches the target, by Brent's

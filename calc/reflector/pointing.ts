@@ -24,12 +24,5 @@ export function pointingErrorForLossDeg(lossDb: number, hpbwDeg: number): number
   return hpbwDeg * Math.sqrt(lossDb / GAUSSIAN_POINTING_COEFFICIENT);
 }
 
-/**
- * Conventional far-field (Fraunhofer) distance 2D²/λ, metres: the quadratic phase error across
- * the aperture is at most π/8 there (IEEE Std 149, test procedures for antennas).
- */
-export function farFieldDistanceM(diameterM: number, wavelengthM: number): number {
-  requirePositive('diameterM', diameterM, 'm');
-  requirePositive('wavelengthM', wavelengthM, 'm');
-  return (2 * diameterM * diameterM) / wavelengthM;
-}
+/** The far-field distance 2D²/λ lives in calc/aperture/farFieldDistance.ts; re-exported for the reflector's callers. */
+export { farFieldDistanceM } from '../aperture/farFieldDistance';

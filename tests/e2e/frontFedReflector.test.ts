@@ -128,6 +128,22 @@ describe('front-fed reflector calculator in Chromium', () => {
     await closeClean({ outside, errors, context });
   });
 
+  it('shows the highest sidelobe beside the first, and marks it on the pattern when a later lobe is higher (q = 12 feed, f/D 0.5, 0.1 D blockage)', async () => {
+    const { page, outside, errors, context } = await openPage(browser);
+    await page.goto(siteUrl(`calculators/${ID}/?v=1&f=10GHz&solve=gain&d=1.2m&fd=0.5&feed=exponent&q=12&blk=12cm`));
+    await waitForCalculator(page, ID);
+    const first = await outputNumber(page, 'firstSidelobeDb');
+    const highest = await outputNumber(page, 'highestSidelobeDb');
+    // SciPy fixture (scripts/fixtures/reflector_sidelobes.py): −32.8 dB first, −29.6 dB highest
+    expect(first).toBeCloseTo(-32.8, 1);
+    expect(highest).toBeCloseTo(-29.6, 1);
+    const refs = await page.locator('[data-plot="far-field-pattern-of-the-on-axis-feed"] .plot-refs').innerHTML();
+    expect(refs).toContain('highest sidelobe');
+    // Lo's beam deviation factor is shown with two digits
+    expect(await outputText(page, 'beamDeviationFactor')).toMatch(/^0\.\d\d$/);
+    await closeClean({ outside, errors, context });
+  });
+
   it('solving for the diameter reaches the target gain; fields that do not apply say so', async () => {
     const { page, outside, errors, context } = await openPage(browser);
     await page.goto(siteUrl(`calculators/${ID}/?v=1&solve=diameter&g=45dB`));

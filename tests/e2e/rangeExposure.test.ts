@@ -32,6 +32,14 @@ describe('link range & RF exposure in Chromium', () => {
     await typeInto(page, ID, 'dant', '1.2 m');
     await expect.poll(() => page.locator('[data-output="apertureDistanceToLimitM"]').count()).toBe(1);
     await expect.poll(() => page.locator('[data-plot="on-axis-power-density-against-distance"] path[data-series="aperture"]').count()).toBe(1);
+    // One antenna description: 30 dBi from a 1.2 m aperture at 10 GHz implies η = 1000/(π·1.2/0.02998)² = 6.32 % (hand-worked);
+    // the η field (team default) gives far more gain, so the page flags the difference and says what it uses.
+    await expect.poll(() => outputText(page, 'impliedEfficiencyPercent')).toBe('6.32 %');
+    expect(await page.locator('[data-code="gain-aperture-mismatch"]').innerText()).toMatch(/use the entered gain/);
+    await typeInto(page, ID, 'dant', '0.1 m');
+    await expect.poll(() => page.locator(`#${ID}-dant-msg`).innerText()).toMatch(/at most .* dBi/);
+    await typeInto(page, ID, 'dant', '1.2 m');
+    await expect.poll(() => page.locator('[data-testid="stale"]').count()).toBe(0);
 
     await typeInto(page, ID, 'solve', '');
     await page.selectOption(`#${ID}-solve`, 'gain');

@@ -9,12 +9,30 @@ import { computeReflector, createReflectorCalculator } from '../../calc/calculat
 import type { CalcInputs } from '../../calc/calculator';
 import { teamConventions } from '../../site/conventions';
 import fixture from '../fixtures/reflector-efficiency.json';
+import sidelobeFixture from '../fixtures/reflector-sidelobes.json';
+import offsetFixture from '../fixtures/reflector-feed-offset.json';
+import { displacedFeedBeam } from '../../calc/reflector/feedOffset';
+import { feedPowerPattern } from '../../calc/reflector/feedPattern';
 
-const BALANIS_15_4 = 'Balanis, Antenna Theory, 4th ed., Wiley 2016, §15.4.1 (figure of aperture efficiency against ψ0 for cos^n feeds; read from the figure)';
-const BALANIS_12_7 = 'Balanis, Antenna Theory, 4th ed., Wiley 2016, §12.7, circular-aperture figures (table number from memory)';
+const BALANIS_15_4 = 'Balanis, Antenna Theory, 4th ed., Wiley 2016, §15.4.1 (section number from memory) (figure of aperture efficiency against ψ0 for cos^n feeds; read from the figure)';
+const BALANIS_12_7 = 'Balanis, Antenna Theory, 4th ed., Wiley 2016, §12.7, circular-aperture figures (section and table numbers from memory)';
 const SCIPY = 'SciPy quad, scripts/fixtures/reflector_efficiency.py (tests/fixtures/reflector-efficiency.json)';
 
 const uniform = () => beamFigures(tabulateAperture(() => 1))!;
+const SIDELOBE_SCIPY = 'NumPy/SciPy, scripts/fixtures/reflector_sidelobes.py (tests/fixtures/reflector-sidelobes.json)';
+const OFFSET_NUMPY = 'NumPy/SciPy direct aperture sum, scripts/fixtures/reflector_feed_offset.py (tests/fixtures/reflector-feed-offset.json)';
+const blocked20 = sidelobeFixture.cases.find((c) => c.focalRatio === 0.4 && c.innerFraction === 0.2)!;
+const laterLobe = sidelobeFixture.cases.find((c) => c.powerExponent === 12 && c.innerFraction === 0.1)!;
+const farOffset = offsetFixture.cases.find((c) => c.focalRatio === 0.3 && c.offsetWavelengths === 4)!;
+/** Beam figures of the cos^q feed at this f/D with a blocked centre, by the calculator's aperture functions. */
+function blockedFigures(focalRatio: number, powerExponent: number, innerFraction: number) {
+  const half = Math.tan(rimHalfAngleRad(focalRatio) / 2);
+  const amplitude = (t: number) => {
+    const psi = 2 * Math.atan(t * half);
+    return Math.sqrt(feedPowerPattern(powerExponent, psi)) * Math.cos(psi / 2) ** 2;
+  };
+  return beamFigures(tabulateAperture(amplitude, innerFraction))!;
+}
 const scipyCase = fixture.efficiencies.find((c) => c.focalRatio === 0.4 && c.powerExponent === 2) ?? fixture.efficiencies[0];
 const scipyOptimum = fixture.optimum.find((c) => c.focalRatio === 0.4) ?? fixture.optimum[0];
 
@@ -121,11 +139,38 @@ export const reflectorCases: ReferenceGroup = {
     {
       id: 'gain-3m-10ghz',
       title: '3 m dish at 10 GHz with η = 0.6: 47.73 dBi',
-      source: 'G = η (πD/λ)², hand-worked: πD/λ = 314.3768, squared × 0.6 = 59 299.6 → 47.7305 dBi (Balanis, Antenna Theory, 4th ed., §15.4)',
+      source: 'G = η (πD/λ)², hand-worked: πD/λ = 314.3768, squared × 0.6 = 59 299.6 → 47.7305 dBi (Balanis, Antenna Theory, 4th ed., §15.4 (section number from memory))',
       expected: 47.7305,
       tolerance: 1e-4,
       unit: 'dBi',
       compute: () => apertureGainDbi(0.6, 3, freeSpaceWavelengthM(10e9)),
+    },
+    {
+      id: 'scipy-first-sidelobe-blockage-0p20',
+      title: 'First sidelobe with a 0.20 D central blockage, f/D 0.4, −10 dB edge taper (first local maximum after the first null)',
+      source: SIDELOBE_SCIPY,
+      expected: blocked20.firstSidelobeDb,
+      tolerance: 1e-6,
+      unit: 'dB',
+      compute: () => blockedFigures(0.4, blocked20.powerExponent, 0.2).firstSidelobeDb!,
+    },
+    {
+      id: 'scipy-highest-sidelobe-later-lobe',
+      title: 'Highest sidelobe, q = 12 feed at f/D 0.5 with a 0.10 D blockage (a later lobe above the first)',
+      source: SIDELOBE_SCIPY,
+      expected: laterLobe.highestSidelobeDb,
+      tolerance: 1e-6,
+      unit: 'dB',
+      compute: () => blockedFigures(0.5, 12, 0.1).highestSidelobeDb!,
+    },
+    {
+      id: 'numpy-coma-loss-fd03-8bw',
+      title: 'Coma loss of a feed 4 λ off axis in a 50 λ dish at f/D 0.3 (about 8.6 beamwidths)',
+      source: OFFSET_NUMPY,
+      expected: farOffset.scanLossDb,
+      tolerance: 1e-4,
+      unit: 'dB',
+      compute: () => displacedFeedBeam(farOffset).scanLossDb,
     },
     {
       id: 'hpbw-70-lambda-over-d',

@@ -1,9 +1,10 @@
 import { describe, expect, it } from 'vitest';
-import { apertureField, apertureFieldSlope, beamFigures, tabulateAperture } from '../../../calc/reflector/aperturePattern';
+import { apertureField, apertureFieldSlope, beamFigures, sidelobePeaks, tabulateAperture } from '../../../calc/reflector/aperturePattern';
 import { rimHalfAngleRad } from '../../../calc/reflector/geometry';
 import { feedPowerPattern } from '../../../calc/reflector/feedPattern';
 import { jinc } from '../../../calc/numeric/besselJ';
 import fixture from '../../fixtures/reflector-efficiency.json';
+import sidelobeFixture from '../../fixtures/reflector-sidelobes.json';
 
 function feedAperture(fd: number, q: number) {
   const half = Math.tan(rimHalfAngleRad(fd) / 2);
@@ -73,5 +74,59 @@ describe('reflector aperture patterns', () => {
       expect(b.firstSidelobeDb!).toBeLessThan(previous.firstSidelobeDb!);
       previous = b;
     }
+  });
+});
+
+describe('sidelobes with a central blockage (first = first local maximum of |F| after the first null)', () => {
+  it('blockage sweep 0…0.30 D at f/D 0.4/−10 dB, 0.3/−15 dB, 0.5/−12 dB: first and highest sidelobe match NumPy/SciPy (scripts/fixtures/reflector_sidelobes.py): u to 1e-6, level to 1e-6 dB', () => {
+    expect(sidelobeFixture.cases.length).toBe(95);
+    for (const c of sidelobeFixture.cases) {
+      const b = beamFigures(tabulateAperture(feedAperture(c.focalRatio, c.powerExponent), c.innerFraction))!;
+      const where = `f/D ${c.focalRatio}, q ${c.powerExponent.toFixed(3)}, blockage ${c.innerFraction}`;
+      expect(Math.abs(b.firstSidelobeU! - c.firstSidelobeU), where).toBeLessThan(1e-6);
+      expect(Math.abs(b.firstSidelobeDb! - c.firstSidelobeDb), where).toBeLessThan(1e-6);
+      expect(Math.abs(b.highestSidelobeU! - c.highestSidelobeU), where).toBeLessThan(1e-6);
+      expect(Math.abs(b.highestSidelobeDb! - c.highestSidelobeDb), where).toBeLessThan(1e-6);
+    }
+  });
+  it('at blockage 0.20 D (f/D 0.4, −10 dB) the first sidelobe is −18.07 dB near u = 5.66, not a later lobe (SciPy fixture; the old between-nulls search gave −35.9 dB at u = 17.8)', () => {
+    const c = sidelobeFixture.cases.find((x) => x.focalRatio === 0.4 && x.innerFraction === 0.2)!;
+    expect(c.firstSidelobeDb).toBeCloseTo(-18.067, 2);
+    const b = beamFigures(tabulateAperture(feedAperture(0.4, c.powerExponent), 0.2))!;
+    expect(b.firstSidelobeU!).toBeLessThan(6);
+    expect(b.firstSidelobeDb!).toBeCloseTo(c.firstSidelobeDb, 6);
+  });
+  it('a strongly tapered feed (q = 12, f/D 0.5) with a 0.1 D blockage has its highest sidelobe after the first (SciPy fixture: −32.8 dB first, −29.6 dB highest)', () => {
+    const c = sidelobeFixture.cases.find((x) => x.powerExponent === 12 && x.innerFraction === 0.1)!;
+    expect(c.highestSidelobeDb - c.firstSidelobeDb).toBeGreaterThan(2);
+    const b = beamFigures(tabulateAperture(feedAperture(0.5, 12), 0.1))!;
+    expect(b.highestSidelobeU!).toBeGreaterThan(b.firstSidelobeU!);
+    expect(b.highestSidelobeDb!).toBeCloseTo(c.highestSidelobeDb, 6);
+  });
+  it('every first sidelobe is a local maximum of |F| with no higher sample between the first null and it (brute-force scan, step 1e-3)', () => {
+    for (const blockage of [0.13, 0.15, 0.2, 0.3]) {
+      const table = tabulateAperture(feedAperture(0.4, 4), blockage);
+      const b = beamFigures(table)!;
+      let u = b.firstNullU;
+      let previous = 0;
+      for (; u < b.firstSidelobeU! - 1e-3; u += 1e-3) {
+        const v = Math.abs(apertureField(table, u));
+        expect(v).toBeGreaterThanOrEqual(previous - 1e-12);
+        previous = v;
+      }
+      expect(Math.abs(apertureField(table, b.firstSidelobeU! + 1e-3))).toBeLessThan(Math.abs(apertureField(table, b.firstSidelobeU!)));
+    }
+  });
+  it('the uniform disc: highest sidelobe = first sidelobe = −17.57 dB (Airy pattern)', () => {
+    const b = beamFigures(tabulateAperture(() => 1))!;
+    expect(b.highestSidelobeU).toBe(b.firstSidelobeU);
+    expect(b.highestSidelobeDb!).toBeCloseTo(-17.57, 2);
+  });
+  it('sidelobe search respects its limit (sidelobeLimitU below the first sidelobe gives none) and sidelobePeaks returns null on a range without a maximum', () => {
+    const uniform = tabulateAperture(() => 1);
+    const b = beamFigures(uniform, 80, 4.5)!;
+    expect(b.firstSidelobeU).toBeNull();
+    expect(b.highestSidelobeDb).toBeNull();
+    expect(sidelobePeaks(uniform, 3.9, 5)).toBeNull();
   });
 });

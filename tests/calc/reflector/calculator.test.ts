@@ -4,6 +4,8 @@ import { computeReflector, createReflectorCalculator } from '../../../calc/calcu
 import type { CalcInputs, NumberParamSpec } from '../../../calc/calculator';
 import { CalcInputError } from '../../../calc/errors';
 import { teamConventions } from '../../../site/conventions';
+import sidelobeFixture from '../../fixtures/reflector-sidelobes.json';
+import offsetFixture from '../../fixtures/reflector-feed-offset.json';
 
 const def = createReflectorCalculator(teamConventions);
 
@@ -243,5 +245,42 @@ describe('reflector calculator properties (fast-check, seeded)', () => {
       }),
       { seed: 11, numRuns: 30 },
     );
+  });
+});
+
+describe('reflector calculator: sidelobes, steering far off axis, and precision (fixes from the issue)', () => {
+  const sidelobeCases = sidelobeFixture.cases;
+  it('with a 0.20 D central blockage (f/D 0.4, −10 dB) the page reports the first sidelobe of the SciPy fixture, −18.07 dB, and the same highest sidelobe (the old search reported −35.9 dB)', () => {
+    const c = sidelobeCases.find((x) => x.focalRatio === 0.4 && x.innerFraction === 0.2)!;
+    const r = computeReflector({ ...defaults(), frequencyHz: 10e9, diameterM: 1.2, focalRatio: 0.4, feedSpec: 'exponent', powerExponent: c.powerExponent, blockageDiameterM: 0.24 });
+    expect(r.values.firstSidelobeDb as number).toBeCloseTo(c.firstSidelobeDb, 6);
+    expect(r.values.highestSidelobeDb as number).toBeCloseTo(c.highestSidelobeDb, 6);
+    expect(r.data.highestSidelobeIsLater).toBe(false);
+  });
+  it('reports a highest sidelobe above the first where a later lobe is higher (q = 12, f/D 0.5, 0.1 D blockage; SciPy fixture)', () => {
+    const c = sidelobeCases.find((x) => x.powerExponent === 12 && x.innerFraction === 0.1)!;
+    const r = computeReflector({ ...defaults(), frequencyHz: 10e9, diameterM: 1.2, focalRatio: 0.5, feedSpec: 'exponent', powerExponent: 12, blockageDiameterM: 0.12 });
+    expect(r.values.highestSidelobeDb as number).toBeCloseTo(c.highestSidelobeDb, 6);
+    expect((r.values.highestSidelobeDb as number) - (r.values.firstSidelobeDb as number)).toBeGreaterThan(2);
+    expect(r.data.highestSidelobeIsLater).toBe(true);
+    expect(r.data.highestSidelobeDeg!).toBeGreaterThan(r.data.firstSidelobeDeg!);
+  });
+  it('coma loss of a feed about 8.6 beamwidths off axis at f/D 0.3 (D = 50 λ, δ = 4 λ) matches the NumPy aperture sum (scripts/fixtures/reflector_feed_offset.py; 1e-4 dB; the old ±0.8 λ/D window gave 1.5 dB too much)', () => {
+    const c = offsetFixture.cases.find((x) => x.focalRatio === 0.3 && x.offsetWavelengths === 4)!;
+    const lambda = 299_792_458 / 10e9;
+    const r = computeReflector({ ...defaults(), frequencyHz: 10e9, diameterM: 50 * lambda, focalRatio: 0.3, feedSpec: 'exponent', powerExponent: c.powerExponent, blockageDiameterM: 0, offsetSpec: 'length', feedOffsetM: 4 * lambda, feedCount: 1 });
+    expect(r.values.beamTiltBeamwidths as number).toBeGreaterThan(8);
+    expect(r.values.scanLossDb as number).toBeCloseTo(c.scanLossDb, 4);
+    expect(r.values.beamPeakDeg as number).toBeCloseTo((c.peakTiltRad * 180) / Math.PI, 3);
+  });
+  it("shows Lo's beam deviation factor, the beam tilts it gives and the Gaussian-rule pointing figures with two significant digits (Lo's factor is 2.7 % from the integrated one at f/D 0.3)", () => {
+    const digits = Object.fromEntries(def.outputs.map((o) => [o.key, o.digits]));
+    for (const key of ['beamDeviationFactor', 'beamTiltDeg', 'beamTiltBeamwidths', 'outerBeamTiltDeg', 'beamSpacingDeg', 'pointingTenthDbDeg', 'pointingOneDbDeg']) expect(digits[key], key).toBe(2);
+    // the 2.7 %: integrated BDF at f/D 0.3 from the NumPy fixture's smallest offset, against Lo's k = 0.36 form
+    const c = offsetFixture.cases.find((x) => x.focalRatio === 0.3 && x.offsetWavelengths === 0.5)!;
+    const integrated = c.peakTiltRad / Math.atan(0.5 / (0.3 * 50));
+    const lo = computeReflector({ ...defaults(), focalRatio: 0.3 }).values.beamDeviationFactor as number;
+    expect(Math.abs(lo / integrated - 1)).toBeGreaterThan(0.01);
+    expect(Math.abs(lo / integrated - 1)).toBeLessThan(0.05);
   });
 });

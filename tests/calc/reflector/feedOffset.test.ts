@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { displacedFeedBeam, feedOffsetAngleRad, feedOffsetForTiltM, loBeamDeviationFactor } from '../../../calc/reflector/feedOffset';
+import { displacedFeedBeam, feedOffsetAngleRad, feedOffsetForTiltM, loBeamDeviationFactor, peakInWidenedWindow } from '../../../calc/reflector/feedOffset';
+import offsetFixture from '../../fixtures/reflector-feed-offset.json';
 import { CalcInputError } from '../../../calc/errors';
 
 describe("Lo's beam deviation factor (Y. T. Lo, IRE Trans. AP-8, 1960)", () => {
@@ -50,4 +51,34 @@ describe('displacedFeedBeam: aperture integration with the exact path error', ()
     expect(() => displacedFeedBeam({ ...base, offsetWavelengths: -1 })).toThrow(CalcInputError);
     expect(() => displacedFeedBeam({ ...base, focalRatio: 0.2, offsetWavelengths: 1 })).toThrow(CalcInputError);
   });
+  it('beam peak and coma loss match a NumPy direct aperture sum with its own dense search, offsets 0.5…6 λ at f/D 0.3 and 0.4 (up to about 14 beamwidths) (scripts/fixtures/reflector_feed_offset.py): peak to 1e-3 λ/D, loss to 1e-4 dB', () => {
+    for (const c of offsetFixture.cases) {
+      const beam = displacedFeedBeam(c);
+      const where = `f/D ${c.focalRatio}, δ ${c.offsetWavelengths} λ`;
+      expect(Math.abs(beam.peakTiltRad - c.peakTiltRad) * c.diameterWavelengths, where).toBeLessThan(1e-3);
+      expect(Math.abs(beam.scanLossDb - c.scanLossDb), where).toBeLessThan(1e-4);
+    }
+  });
+  it('far off axis the peak lies beyond the old ±0.8 λ/D window around Lo\'s prediction (f/D 0.3, δ = 6 λ: fixture peak more than 2 λ/D beyond it), and is still found', () => {
+    const c = offsetFixture.cases.find((x) => x.focalRatio === 0.3 && x.offsetWavelengths === 6)!;
+    const predicted = loBeamDeviationFactor(0.3) * Math.atan(6 / (0.3 * 50));
+    expect((Math.sin(c.peakTiltRad) - Math.sin(predicted)) * 50).toBeGreaterThan(2);
+    expect(displacedFeedBeam(c).scanLossDb).toBeCloseTo(c.scanLossDb, 4);
+  });
 });
+
+describe('peakInWidenedWindow', () => {
+  const bump = (centre: number) => (s: number) => Math.exp(-(((s - centre) / 0.01) ** 2));
+  it('finds a peak far outside the first window by doubling it (1e-8)', () => {
+    expect(peakInWidenedWindow(bump(0.3), 0, 0.02, 0.002, 1e-10)).toBeCloseTo(0.3, 8);
+    expect(peakInWidenedWindow(bump(-0.45), 0, 0.02, 0.002, 1e-10)).toBeCloseTo(-0.45, 8);
+  });
+  it('stops at the edge of visible space when the function rises towards it', () => {
+    expect(peakInWidenedWindow((s) => s, 0.5, 0.1, 0.01, 1e-10)).toBeCloseTo(1, 6);
+  });
+  it('rejects a non-positive window or step', () => {
+    expect(() => peakInWidenedWindow(bump(0), 0, 0, 0.01, 1e-10)).toThrow(CalcInputError);
+    expect(() => peakInWidenedWindow(bump(0), 0, 0.1, 0, 1e-10)).toThrow(CalcInputError);
+  });
+});
+
