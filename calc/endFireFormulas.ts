@@ -124,7 +124,7 @@ export const yagiGainFormula = defineFormula({
   source: 'P. P. Viezbicke, "Yagi Antenna Design", NBS Technical Note 688, 1976 (table values recalled from memory); interpolation linear in log10(boom) is our choice.',
   argNames: ['boomWavelengths'],
   evaluate: ({ boomWavelengths }) => yagiGainDbd(boomWavelengths).gainDbd,
-  example: { args: { boomWavelengths: 2.2 }, expected: 12.25, tolerance: 1e-12, source: 'NBS TN 688 tabulated value at 2.2 λ (from memory)' },
+  example: { args: { boomWavelengths: Math.sqrt(1.2 * 2.2) }, expected: 11.225, tolerance: 1e-12, source: 'Interpolation linear in log10(boom), worked by hand at the geometric mean of the 1.2 λ and 2.2 λ rows: the mean of their gains, (10.2 + 12.25)/2 dBd (table values transcribed from memory)' },
 });
 
 /** Square aperture of side L: 4π L²/λ². */

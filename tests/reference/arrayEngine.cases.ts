@@ -16,6 +16,8 @@ import fixture from '../fixtures/array-weights.json';
 
 const db = (x: number) => 10 * Math.log10(x);
 const DEG = 180 / Math.PI;
+/** Beamwidth (rad) times the aperture size in wavelengths: the constant of HPBW ≈ k λ/L. */
+const beamwidthTimesSizeRad = (hpbwDeg: number, sizeWavelengths: number) => (hpbwDeg / DEG) * sizeWavelengths;
 const SCIPY = 'SciPy 1.17.1 via scripts/fixtures/array_weights.py (tests/fixtures/array-weights.json)';
 
 const taylorCase = fixture.taylor.find((c) => c.count === 16 && c.nbar === 4 && c.sidelobeDb === 30 && c.norm)!;
@@ -36,7 +38,8 @@ export const arrayEngineCases: ReferenceGroup = {
       source: 'Closed form: Hansen, Phased Array Antennas, 2nd ed., ch. 2; integral: IEEE Std 145 definition by Gauss–Legendre quadrature',
       expected: db(uniformLinearArrayDirectivity(16, 0.7, 25)),
       tolerance: 0.01,
-      unit: 'dBi',
+      quantity: 'dBi',
+      reads: 'directivityDbi',
       compute: () => directivity(buildArrayModel({ geometry: { kind: 'linear', count: 16, spacingWavelengths: 0.7 }, steering: { thetaDeg: 25, phiDeg: 0 } }), { method: 'quadrature' }).directivityDbi,
     },
     {
@@ -45,7 +48,8 @@ export const arrayEngineCases: ReferenceGroup = {
       source: `scipy.signal.windows.taylor(16, 4, 30, norm=True); ${SCIPY}`,
       expected: taylorCase.weights[2],
       tolerance: 1e-12,
-      unit: '',
+      quantity: 'ratio',
+      reads: 'taylorLineWeights',
       compute: () => taylorLineWeights(16, 4, 30, true)[2],
     },
     {
@@ -54,7 +58,8 @@ export const arrayEngineCases: ReferenceGroup = {
       source: `scipy.signal.windows.chebwin(16, 30); ${SCIPY}`,
       expected: chebyshevCase.weights[1],
       tolerance: 1e-9,
-      unit: '',
+      quantity: 'ratio',
+      reads: 'chebyshevLineWeights',
       compute: () => chebyshevLineWeights(16, 30)[1],
     },
     {
@@ -63,17 +68,19 @@ export const arrayEngineCases: ReferenceGroup = {
       source: 'Dolph, Proc. IRE 34 (1946): equiripple sidelobes at the design level',
       expected: -40,
       tolerance: 0.01,
-      unit: 'dB',
+      quantity: 'dB',
+      reads: 'peakSidelobeDb',
       compute: () => principalPlaneMetrics(buildArrayModel({ geometry: { kind: 'linear', count: 21, spacingWavelengths: 0.5 }, taper: { kind: 'chebyshev', sidelobeDb: 40 } })).theta.peakSidelobeDb!,
     },
     {
       id: 'array-line-hpbw',
-      title: 'Uniform line source: HPBW × L/λ = 0.886 rad',
+      title: 'Uniform line source: HPBW (rad) × L/λ = 0.886',
       source: 'Balanis, Antenna Theory, 4th ed., ch. 12 (uniform line source); Stutzman & Thiele, Antenna Theory and Design',
       expected: 0.886,
       tolerance: 0.886e-3,
-      unit: 'rad',
-      compute: () => (longLine().hpbwDeg! / DEG) * 250,
+      quantity: 'angleRad',
+      reads: 'beamwidthTimesSizeRad',
+      compute: () => beamwidthTimesSizeRad(longLine().hpbwDeg!, 250),
     },
     {
       id: 'array-line-sidelobe',
@@ -81,17 +88,19 @@ export const arrayEngineCases: ReferenceGroup = {
       source: 'Balanis, Antenna Theory, 4th ed., ch. 12 (uniform line source)',
       expected: -13.26,
       tolerance: 0.01,
-      unit: 'dB',
+      quantity: 'dB',
+      reads: 'peakSidelobeDb',
       compute: () => longLine().peakSidelobeDb!,
     },
     {
       id: 'array-disc-hpbw',
-      title: 'Uniform circular aperture (D = 50 λ lattice disc): HPBW × D/λ = 1.029 rad',
+      title: 'Uniform circular aperture (D = 50 λ lattice disc): HPBW (rad) × D/λ = 1.029',
       source: 'Balanis, Antenna Theory, 4th ed., ch. 12 (uniform circular aperture)',
       expected: 1.029,
       tolerance: 1.029 * 0.005,
-      unit: 'rad',
-      compute: () => (disc().hpbwDeg! / DEG) * 50,
+      quantity: 'angleRad',
+      reads: 'beamwidthTimesSizeRad',
+      compute: () => beamwidthTimesSizeRad(disc().hpbwDeg!, 50),
     },
     {
       id: 'array-disc-sidelobe',
@@ -99,7 +108,8 @@ export const arrayEngineCases: ReferenceGroup = {
       source: 'Balanis, Antenna Theory, 4th ed., ch. 12 (uniform circular aperture)',
       expected: -17.57,
       tolerance: 0.1,
-      unit: 'dB',
+      quantity: 'dB',
+      reads: 'peakSidelobeDb',
       compute: () => disc().peakSidelobeDb!,
     },
     {
@@ -108,7 +118,8 @@ export const arrayEngineCases: ReferenceGroup = {
       source: 'Balanis, Antenna Theory, 4th ed., §12.5 (D = 4πA/λ² for a uniform aperture)',
       expected: db(4 * Math.PI * 24 * 24 * 0.25),
       tolerance: 0.1,
-      unit: 'dBi',
+      quantity: 'dBi',
+      reads: 'directivityDbi',
       compute: () => directivity(buildArrayModel({ geometry: { kind: 'planar', lattice: 'rectangular', columns: 24, rows: 24, spacingXWavelengths: 0.5 }, element: { kind: 'isotropic', groundPlaneHeightWavelengths: 0.25 } })).directivityDbi,
     },
     {
@@ -117,7 +128,8 @@ export const arrayEngineCases: ReferenceGroup = {
       source: 'Balanis, Antenna Theory, 4th ed., §6.4 (ordinary end-fire, D ≈ 4L/λ)',
       expected: 1,
       tolerance: 0.01,
-      unit: '',
+      quantity: 'ratio',
+      reads: 'directivity',
       compute: () => directivity(buildArrayModel({ geometry: { kind: 'linear', count: 100, spacingWavelengths: 0.25 }, phaseStepRad: ordinaryEndFirePhaseStepRad(0.25), beam: { thetaDeg: 90, phiDeg: 0 } })).directivity / (4 * 25),
     },
   ],

@@ -15,6 +15,8 @@ const BALANIS_12_7 = 'Balanis, Antenna Theory, 4th ed., Wiley 2016, §12.7, circ
 const SCIPY = 'SciPy quad, scripts/fixtures/reflector_efficiency.py (tests/fixtures/reflector-efficiency.json)';
 
 const uniform = () => beamFigures(tabulateAperture(() => 1))!;
+/** HPBW (rad) × D/λ of a circular aperture from its half-power point u = (πD/λ) sin(θ/2): 2u/π for a narrow beam. */
+const beamwidthTimesDiameterRad = (halfPowerU: number) => (2 * halfPowerU) / Math.PI;
 const scipyCase = fixture.efficiencies.find((c) => c.focalRatio === 0.4 && c.powerExponent === 2) ?? fixture.efficiencies[0];
 const scipyOptimum = fixture.optimum.find((c) => c.focalRatio === 0.4) ?? fixture.optimum[0];
 
@@ -43,17 +45,19 @@ export const reflectorCases: ReferenceGroup = {
       source: 'Ruze, "Antenna tolerance theory — a review", Proc. IEEE 54(4), 1966 (hand-worked)',
       expected: Math.exp(-((Math.PI / 4) ** 2)),
       tolerance: 1e-12,
-      unit: '',
+      quantity: 'ratio',
+      reads: 'ruzeEfficiency',
       compute: () => ruzeEfficiency(0.03 / 16, 0.03),
     },
     {
       id: 'uniform-hpbw-factor',
-      title: 'Uniform circular aperture: HPBW = 1.029 λ/D radians',
+      title: 'Uniform circular aperture: HPBW (rad) × D/λ = 1.029',
       source: BALANIS_12_7,
       expected: 1.029,
       tolerance: 5e-4,
-      unit: 'rad·D/λ',
-      compute: () => (2 * uniform().halfPowerU) / Math.PI,
+      quantity: 'angleRad',
+      reads: 'beamwidthTimesDiameterRad',
+      compute: () => beamwidthTimesDiameterRad(uniform().halfPowerU),
     },
     {
       id: 'uniform-first-sidelobe',
@@ -61,7 +65,8 @@ export const reflectorCases: ReferenceGroup = {
       source: BALANIS_12_7,
       expected: -17.57,
       tolerance: 0.005,
-      unit: 'dB',
+      quantity: 'dB',
+      reads: 'firstSidelobeDb',
       compute: () => uniform().firstSidelobeDb!,
     },
     {
@@ -70,7 +75,8 @@ export const reflectorCases: ReferenceGroup = {
       source: BALANIS_15_4,
       expected: 0.82,
       tolerance: 0.015,
-      unit: '',
+      quantity: 'ratio',
+      reads: 'aperture',
       compute: () => illuminationEfficiencies(2, rimHalfAngleRad(0.4)).aperture,
     },
     {
@@ -79,7 +85,8 @@ export const reflectorCases: ReferenceGroup = {
       source: BALANIS_15_4,
       expected: -11,
       tolerance: 1,
-      unit: 'dB',
+      quantity: 'dB',
+      reads: 'edgeTaperDb',
       compute: () => optimumIllumination(rimHalfAngleRad(0.5)).edgeTaperDb,
     },
     {
@@ -88,7 +95,8 @@ export const reflectorCases: ReferenceGroup = {
       source: BALANIS_15_4,
       expected: 0.82,
       tolerance: 0.015,
-      unit: '',
+      quantity: 'ratio',
+      reads: 'efficiency',
       compute: () => optimumIllumination(rimHalfAngleRad(0.5)).efficiency,
     },
     {
@@ -97,7 +105,8 @@ export const reflectorCases: ReferenceGroup = {
       source: SCIPY,
       expected: scipyCase.spillover,
       tolerance: 2e-6,
-      unit: '',
+      quantity: 'ratio',
+      reads: 'spillover',
       compute: () => illuminationEfficiencies(scipyCase.powerExponent, rimHalfAngleRad(scipyCase.focalRatio)).spillover,
     },
     {
@@ -106,7 +115,8 @@ export const reflectorCases: ReferenceGroup = {
       source: SCIPY,
       expected: scipyCase.taper,
       tolerance: 2e-6,
-      unit: '',
+      quantity: 'ratio',
+      reads: 'taper',
       compute: () => illuminationEfficiencies(scipyCase.powerExponent, rimHalfAngleRad(scipyCase.focalRatio)).taper,
     },
     {
@@ -115,7 +125,8 @@ export const reflectorCases: ReferenceGroup = {
       source: SCIPY,
       expected: scipyOptimum.efficiency,
       tolerance: 1e-6,
-      unit: '',
+      quantity: 'ratio',
+      reads: 'efficiency',
       compute: () => optimumIllumination(rimHalfAngleRad(scipyOptimum.focalRatio)).efficiency,
     },
     {
@@ -124,16 +135,18 @@ export const reflectorCases: ReferenceGroup = {
       source: 'G = η (πD/λ)², hand-worked: πD/λ = 314.3768, squared × 0.6 = 59 299.6 → 47.7305 dBi (Balanis, Antenna Theory, 4th ed., §15.4)',
       expected: 47.7305,
       tolerance: 1e-4,
-      unit: 'dBi',
+      quantity: 'dBi',
+      reads: 'apertureGainDbi',
       compute: () => apertureGainDbi(0.6, 3, freeSpaceWavelengthM(10e9)),
     },
     {
       id: 'hpbw-70-lambda-over-d',
-      title: 'About −10 dB edge taper: HPBW ≈ 70 λ/D degrees (calculator at its defaults)',
+      title: 'About −10 dB edge taper: HPBW (°) × D/λ ≈ 70 (calculator at its defaults)',
       source: 'rule of thumb: common practice, no source (±10 %)',
       expected: 70,
       tolerance: 7,
-      unit: '°·D/λ',
+      quantity: 'angleDeg',
+      reads: 'hpbwFactorDeg',
       compute: () => computeReflector(atDefaults()).values.hpbwFactorDeg as number,
     },
   ],
