@@ -33,7 +33,7 @@ export function reciprocalVectors(vectorsWavelengths: Array<[number, number]>): 
 /**
  * Directions of the grating lobes inside visible space (u² + v² ≤ 1) for lattice vectors in λ
  * and beam direction (θ0, φ0): û0 + p b1 + q b2 with (p, q) ≠ (0, 0) (Mailloux, "Phased Array
- * Antenna Handbook", 2nd ed., §2.1). For a line along x the lobe cone is reported where it
+ * Antenna Handbook", 2nd ed., §2.1 (section number from memory)). For a line along x the lobe cone is reported where it
  * crosses the plane through the beam (v = v0).
  */
 export function gratingLobeDirections(vectorsWavelengths: Array<[number, number]>, beam: DirectionDeg): GratingLobe[] {

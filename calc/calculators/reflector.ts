@@ -476,12 +476,12 @@ export function createReflectorCalculator(conventions: TeamConventions): Calcula
       'Safety: a transmitting dish concentrates power far along its beam, and inside 2D²/λ far-field power-density formulas do not hold; exposure is assessed under local regulations by a qualified person.',
     ],
     references: [
-      'C. A. Balanis, Antenna Theory: Analysis and Design, 4th ed., Wiley, 2016, §15.4 (front-fed paraboloid: geometry, spillover, taper and aperture efficiency).',
+      'C. A. Balanis, Antenna Theory: Analysis and Design, 4th ed., Wiley, 2016, §15.4 (section number from memory; front-fed paraboloid: geometry, spillover, taper and aperture efficiency).',
       'J. Ruze, "Antenna tolerance theory — a review", Proc. IEEE 54(4), 1966.',
       'Y. T. Lo, "On the beam deviation factor of a parabolic reflector", IRE Trans. Antennas Propag., AP-8, 1960.',
       'J. Ruze, "Lateral-feed displacement in a paraboloid", IEEE Trans. Antennas Propag., AP-13, 1965.',
       'W. L. Stutzman and G. A. Thiele, Antenna Theory and Design, 3rd ed., Wiley, 2012 (reflector antennas, aperture blockage).',
-      'IEEE Std 145 (definitions of terms for antennas); IEEE Std 149 (test procedures for antennas, far-field distance).',
+      'IEEE Std 145 (definitions of terms for antennas); IEEE Std 149-2021, IEEE Recommended Practice for Antenna Measurements (far-field distance).',
     ],
     examples: [
       { title: 'Ground-station dish for a polar-orbit downlink, 8.2 GHz, 3.7 m, f/D 0.38', query: '?v=1&f=8.2GHz&solve=gain&d=3.7m&fd=0.38&feed=taper&et=-11dB&rms=0.6mm&blk=28cm&strut=0.025&loss=0.4dB&offby=length&off=0cm&n=1' },

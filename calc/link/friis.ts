@@ -13,7 +13,7 @@ export function freeSpacePathLossDb(distanceM: number, frequencyHz: number): num
 
 /**
  * Free-space basic transmission loss in the ITU-R P.525 form: 32.4 + 20·log10(f/MHz) + 20·log10(d/km) dB.
- * Recommendation ITU-R P.525-4 (2019), eq. (8). The constant 32.4 is 20·log10(4π·10⁹/c) = 32.45 rounded.
+ * Recommendation ITU-R P.525-4 (2019), eq. (8) (equation number from memory). The constant 32.4 is 20·log10(4π·10⁹/c) = 32.45 rounded.
  */
 export function p525BasicTransmissionLossDb(distanceM: number, frequencyHz: number): number {
   requirePositive('distanceM', distanceM, 'm');

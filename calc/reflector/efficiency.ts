@@ -3,7 +3,7 @@
  * cos^q ψ power pattern of feedPattern.ts, by Gauss–Legendre integration over the feed angle ψ.
  * With I1 = ∫0^ψ0 √P(ψ) tan(ψ/2) dψ, I2 = ∫0^ψ0 P(ψ) sin ψ dψ, Itot = ∫0^π/2 P(ψ) sin ψ dψ:
  *   spillover η_s = I2 / Itot,  taper η_t = 2 I1² / (tan²(ψ0/2) I2),  product η_s η_t.
- * (Balanis, Antenna Theory, 4th ed., §15.4.1, eqs. for ε_s, ε_t, ε_ap; the aperture field of a
+ * (Balanis, Antenna Theory, 4th ed., §15.4.1 (section number from memory), eqs. for ε_s, ε_t, ε_ap; the aperture field of a
  * ray at ψ is ∝ √P(ψ)/r with r = f/cos²(ψ/2), ρ = 2f tan(ψ/2).)
  */
 import { requireInRange } from '../errors';

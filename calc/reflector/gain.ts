@@ -1,6 +1,6 @@
 /**
  * Gain of a circular aperture: G = η (πD/λ)² (IEEE Std 145 definitions; Balanis, Antenna Theory,
- * 4th ed., §15.4.1), and its inverse for the diameter.
+ * 4th ed., §15.4.1 (section number from memory)), and its inverse for the diameter.
  */
 import { requireInRange, requirePositive, CalcInputError } from '../errors';
 import { brentRoot } from '../numeric/brentRoot';

@@ -1,7 +1,7 @@
 /**
  * Geometry of a front-fed (prime-focus) paraboloid: z = ρ²/(4f), focus at z = f, vertex at the
  * origin. ψ is the angle at the focus between the axis (towards the vertex) and a ray to the
- * reflector. Standard results; e.g. Balanis, Antenna Theory, 4th ed., §15.4.
+ * reflector. Standard results; e.g. Balanis, Antenna Theory, 4th ed., §15.4 (section number from memory).
  */
 import { requireInRange, requirePositive } from '../errors';
 

@@ -26,7 +26,7 @@ export function pointingErrorForLossDeg(lossDb: number, hpbwDeg: number): number
 
 /**
  * Conventional far-field (Fraunhofer) distance 2D²/λ, metres: the quadratic phase error across
- * the aperture is at most π/8 there (IEEE Std 149, test procedures for antennas).
+ * the aperture is at most π/8 there (IEEE Std 149-2021, IEEE Recommended Practice for Antenna Measurements).
  */
 export function farFieldDistanceM(diameterM: number, wavelengthM: number): number {
   requirePositive('diameterM', diameterM, 'm');

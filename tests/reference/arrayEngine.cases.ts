@@ -35,7 +35,7 @@ export const arrayEngineCases: ReferenceGroup = {
     {
       id: 'array-closed-form-vs-integral',
       title: '16-element line, 0.7 λ, scanned 25°: closed-form directivity equals integration over the sphere',
-      source: 'Closed form: Hansen, Phased Array Antennas, 2nd ed., ch. 2; integral: IEEE Std 145 definition by Gauss–Legendre quadrature',
+      source: 'Closed form: Hansen, Phased Array Antennas, 2nd ed., ch. 2 (chapter number from memory); integral: IEEE Std 145 definition by Gauss–Legendre quadrature',
       expected: db(uniformLinearArrayDirectivity(16, 0.7, 25)),
       tolerance: 0.01,
       quantity: 'dBi',
@@ -75,7 +75,7 @@ export const arrayEngineCases: ReferenceGroup = {
     {
       id: 'array-line-hpbw',
       title: 'Uniform line source: HPBW (rad) × L/λ = 0.886',
-      source: 'Balanis, Antenna Theory, 4th ed., ch. 12 (uniform line source); Stutzman & Thiele, Antenna Theory and Design',
+      source: 'Balanis, Antenna Theory, 4th ed., ch. 12 (chapter number from memory; uniform line source); Stutzman & Thiele, Antenna Theory and Design',
       expected: 0.886,
       tolerance: 0.886e-3,
       quantity: 'angleRad',
@@ -85,7 +85,7 @@ export const arrayEngineCases: ReferenceGroup = {
     {
       id: 'array-line-sidelobe',
       title: 'Uniform line source: first sidelobe −13.26 dB',
-      source: 'Balanis, Antenna Theory, 4th ed., ch. 12 (uniform line source)',
+      source: 'Balanis, Antenna Theory, 4th ed., ch. 12 (chapter number from memory; uniform line source)',
       expected: -13.26,
       tolerance: 0.01,
       quantity: 'dB',
@@ -95,7 +95,7 @@ export const arrayEngineCases: ReferenceGroup = {
     {
       id: 'array-disc-hpbw',
       title: 'Uniform circular aperture (D = 50 λ lattice disc): HPBW (rad) × D/λ = 1.029',
-      source: 'Balanis, Antenna Theory, 4th ed., ch. 12 (uniform circular aperture)',
+      source: 'Balanis, Antenna Theory, 4th ed., ch. 12 (chapter number from memory; uniform circular aperture)',
       expected: 1.029,
       tolerance: 1.029 * 0.005,
       quantity: 'angleRad',
@@ -105,7 +105,7 @@ export const arrayEngineCases: ReferenceGroup = {
     {
       id: 'array-disc-sidelobe',
       title: 'Uniform circular aperture (D = 50 λ lattice disc): first sidelobe −17.57 dB',
-      source: 'Balanis, Antenna Theory, 4th ed., ch. 12 (uniform circular aperture)',
+      source: 'Balanis, Antenna Theory, 4th ed., ch. 12 (chapter number from memory; uniform circular aperture)',
       expected: -17.57,
       tolerance: 0.1,
       quantity: 'dB',
@@ -115,7 +115,7 @@ export const arrayEngineCases: ReferenceGroup = {
     {
       id: 'array-aperture-directivity',
       title: '24 × 24 λ/2 planar array over a λ/4 ground plane: directivity 4πA/λ²',
-      source: 'Balanis, Antenna Theory, 4th ed., §12.5 (D = 4πA/λ² for a uniform aperture)',
+      source: 'Balanis, Antenna Theory, 4th ed., §12.5 (section number from memory; D = 4πA/λ² for a uniform aperture)',
       expected: db(4 * Math.PI * 24 * 24 * 0.25),
       tolerance: 0.1,
       quantity: 'dBi',
@@ -125,7 +125,7 @@ export const arrayEngineCases: ReferenceGroup = {
     {
       id: 'array-end-fire',
       title: 'Ordinary end-fire line, 100 elements at λ/4: D / (4L/λ) = 1',
-      source: 'Balanis, Antenna Theory, 4th ed., §6.4 (ordinary end-fire, D ≈ 4L/λ)',
+      source: 'Balanis, Antenna Theory, 4th ed., §6.4 (section number from memory; ordinary end-fire, D ≈ 4L/λ)',
       expected: 1,
       tolerance: 0.01,
       quantity: 'ratio',

@@ -10,8 +10,8 @@ import type { CalcInputs } from '../../calc/calculator';
 import { teamConventions } from '../../site/conventions';
 import fixture from '../fixtures/reflector-efficiency.json';
 
-const BALANIS_15_4 = 'Balanis, Antenna Theory, 4th ed., Wiley 2016, §15.4.1 (figure of aperture efficiency against ψ0 for cos^n feeds; read from the figure)';
-const BALANIS_12_7 = 'Balanis, Antenna Theory, 4th ed., Wiley 2016, §12.7, circular-aperture figures (table number from memory)';
+const BALANIS_15_4 = 'Balanis, Antenna Theory, 4th ed., Wiley 2016, §15.4.1 (section number from memory; figure of aperture efficiency against ψ0 for cos^n feeds; read from the figure)';
+const BALANIS_12_7 = 'Balanis, Antenna Theory, 4th ed., Wiley 2016, §12.7 (section number from memory), circular-aperture figures';
 const SCIPY = 'SciPy quad, scripts/fixtures/reflector_efficiency.py (tests/fixtures/reflector-efficiency.json)';
 
 const uniform = () => beamFigures(tabulateAperture(() => 1))!;
@@ -132,7 +132,7 @@ export const reflectorCases: ReferenceGroup = {
     {
       id: 'gain-3m-10ghz',
       title: '3 m dish at 10 GHz with η = 0.6: 47.73 dBi',
-      source: 'G = η (πD/λ)², hand-worked: πD/λ = 314.3768, squared × 0.6 = 59 299.6 → 47.7305 dBi (Balanis, Antenna Theory, 4th ed., §15.4)',
+      source: 'G = η (πD/λ)², hand-worked: πD/λ = 314.3768, squared × 0.6 = 59 299.6 → 47.7305 dBi (Balanis, Antenna Theory, 4th ed., §15.4 (section number from memory))',
       expected: 47.7305,
       tolerance: 1e-4,
       quantity: 'dBi',

@@ -7,7 +7,7 @@ import { jinc } from '../../../calc/numeric/besselJ';
 
 const DEG = 180 / Math.PI;
 
-describe('principalPlaneMetrics: uniform line source (textbook constants: Balanis, "Antenna Theory", 4th ed., ch. 12 uniform aperture; Stutzman & Thiele, "Antenna Theory and Design", uniform line source)', () => {
+describe('principalPlaneMetrics: uniform line source (textbook constants: Balanis, "Antenna Theory", 4th ed., ch. 12 (chapter number from memory) uniform aperture; Stutzman & Thiele, "Antenna Theory and Design", uniform line source)', () => {
   // 2,000 elements at λ/8 approximate a continuous line source of length L = N·d = 250 λ.
   const model = buildArrayModel({ geometry: { kind: 'linear', count: 2000, spacingWavelengths: 0.125 } });
   const { theta } = principalPlaneMetrics(model);
@@ -22,7 +22,7 @@ describe('principalPlaneMetrics: uniform line source (textbook constants: Balani
   });
 });
 
-describe('uniform circular aperture (textbook constants: Balanis, "Antenna Theory", 4th ed., ch. 12 circular aperture; Stutzman & Thiele, "Antenna Theory and Design")', () => {
+describe('uniform circular aperture (textbook constants: Balanis, "Antenna Theory", 4th ed., ch. 12 (chapter number from memory) circular aperture; Stutzman & Thiele, "Antenna Theory and Design")', () => {
   it('continuous pattern jinc(πD/λ sin θ): HPBW 1.029 λ/D rad (0.1 %) and first sidelobe −17.57 dB (0.01 dB)', () => {
     const diameter = 40;
     const power = (theta: number) => jinc(Math.PI * diameter * Math.sin(theta)) ** 2;
@@ -42,7 +42,7 @@ describe('uniform circular aperture (textbook constants: Balanis, "Antenna Theor
 });
 
 describe('beam broadening with scan', () => {
-  it('long linear array: HPBW(θ0) = HPBW(0)/cos θ0 within 1 % up to 60° (Mailloux, "Phased Array Antenna Handbook", 2nd ed., ch. 1; also DOMAIN.md)', () => {
+  it('long linear array: HPBW(θ0) = HPBW(0)/cos θ0 within 1 % up to 60° (Mailloux, "Phased Array Antenna Handbook", 2nd ed., ch. 1 (chapter number from memory))', () => {
     const hpbw = (scanDeg: number) => principalPlaneMetrics(buildArrayModel({ geometry: { kind: 'linear', count: 200, spacingWavelengths: 0.5 }, steering: { thetaDeg: scanDeg, phiDeg: 0 } })).theta.hpbwDeg!;
     const broadside = hpbw(0);
     for (const scan of [15, 30, 45, 60]) {

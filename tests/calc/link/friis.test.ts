@@ -18,7 +18,7 @@ describe('freeSpacePathLossDb(distanceM, frequencyHz)', () => {
   it('grows by 6.02 dB per doubling of distance (inverse-square law)', () => {
     expect(freeSpacePathLossDb(2000, 3e9) - freeSpacePathLossDb(1000, 3e9)).toBeCloseTo(20 * Math.log10(2), 12);
   });
-  it('agrees with the ITU-R P.525-4 eq. (8) form within 0.05 dB everywhere (property; the P.525 constant 32.4 is 32.448 rounded)', () => {
+  it('agrees with the ITU-R P.525-4 eq. (8) (equation number from memory) form within 0.05 dB everywhere (property; the P.525 constant 32.4 is 32.448 rounded)', () => {
     fc.assert(
       fc.property(fc.double({ min: 1, max: 1e8, noNaN: true }), fc.double({ min: 1e6, max: 1e12, noNaN: true }), (d, f) => {
         const diff = freeSpacePathLossDb(d, f) - p525BasicTransmissionLossDb(d, f);
@@ -27,7 +27,7 @@ describe('freeSpacePathLossDb(distanceM, frequencyHz)', () => {
       }),
     );
   });
-  it('P.525-4 eq. (8) at 2.4 GHz and 10 km: 32.4 + 67.60 + 20 = 120.00 dB', () => {
+  it('P.525-4 eq. (8) (equation number from memory) at 2.4 GHz and 10 km: 32.4 + 67.60 + 20 = 120.00 dB', () => {
     expect(p525BasicTransmissionLossDb(10_000, 2.4e9)).toBeCloseTo(120.0042, 3);
   });
   it('rejects a zero distance', () => {

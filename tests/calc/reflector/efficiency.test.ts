@@ -37,7 +37,7 @@ describe('spillover and taper efficiency: closed forms and textbook results', ()
     const i1 = (2 * s) / (1 + s) - Math.log(1 + s);
     expect(reflectorTaperEfficiency(2, rimHalfAngleRad(0.5))).toBeCloseTo((2 * i1 * i1) / (s * ((1 - 0.6 ** 3) / 3)), 12);
   });
-  it('for cos^n feeds n = 2, 4, 6, 8 the best rim angle is about 66°, 53.5°, 46.5°, 42°, with spillover × taper ≈ 0.82–0.83 and an edge taper near −11 dB (Balanis, Antenna Theory, 4th ed., §15.4.1, figure of aperture efficiency vs ψ0 for cos^n feeds; angles read from the figure, ±1.5°)', () => {
+  it('for cos^n feeds n = 2, 4, 6, 8 the best rim angle is about 66°, 53.5°, 46.5°, 42°, with spillover × taper ≈ 0.82–0.83 and an edge taper near −11 dB (Balanis, Antenna Theory, 4th ed., §15.4.1 (section number from memory), figure of aperture efficiency vs ψ0 for cos^n feeds; angles read from the figure, ±1.5°)', () => {
     for (const [n, psiDeg] of [[2, 66], [4, 53.5], [6, 46.5], [8, 42]] as const) {
       const best = goldenMinimize((psi) => -illuminationEfficiencies(n, psi).aperture, 0.3, 1.5, 1e-8);
       expect(Math.abs((best * 180) / Math.PI - psiDeg)).toBeLessThan(1.5);
@@ -48,7 +48,7 @@ describe('spillover and taper efficiency: closed forms and textbook results', ()
       expect(edgeTaperDb(n, best)).toBeLessThan(-10);
     }
   });
-  it('optimumIllumination gives a −10 to −11 dB edge taper and 0.81–0.83 efficiency for f/D 0.4…1, where the optimum q ≥ 2 (textbook rule, Balanis 4th ed. §15.4.1; deeper dishes want q < 2 and reach a little more)', () => {
+  it('optimumIllumination gives a −10 to −11 dB edge taper and 0.81–0.83 efficiency for f/D 0.4…1, where the optimum q ≥ 2 (textbook rule, Balanis 4th ed. §15.4.1 (section number from memory); deeper dishes want q < 2 and reach a little more)', () => {
     for (const fd of [0.4, 0.5, 0.7, 1]) {
       const o = optimumIllumination(rimHalfAngleRad(fd));
       expect(o.edgeTaperDb).toBeGreaterThan(-11.2);

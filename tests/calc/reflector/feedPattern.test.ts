@@ -14,7 +14,7 @@ describe('cos^q ψ POWER-pattern feed', () => {
   it('the q = 2 power pattern falls 6.02 dB at 60° (10·2·log10 0.5, hand-worked): power, not field, convention', () => {
     expect(feedEdgeLevelDb(2, rad(60))).toBeCloseTo(-6.0206, 4);
   });
-  it('edgeTaperDb(2, 66°) = −7.814 − 3.056 = −10.870 dB with space attenuation (hand-worked; Balanis 4th ed. §15.4.1 puts the optimum near −11 dB)', () => {
+  it('edgeTaperDb(2, 66°) = −7.814 − 3.056 = −10.870 dB with space attenuation (hand-worked; Balanis 4th ed. §15.4.1 (section number from memory) puts the optimum near −11 dB)', () => {
     expect(edgeTaperDb(2, rad(66))).toBeCloseTo(-10.870077909836, 9);
   });
   it('powerExponentForEdgeTaper inverts edgeTaperDb (round trip to 1e-10)', () => {

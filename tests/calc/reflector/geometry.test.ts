@@ -12,7 +12,7 @@ import { CalcInputError } from '../../../calc/errors';
 
 const deg = (rad: number) => (rad * 180) / Math.PI;
 
-// Source for every relation here: paraboloid geometry, Balanis, Antenna Theory, 4th ed., §15.4.
+// Source for every relation here: paraboloid geometry, Balanis, Antenna Theory, 4th ed., §15.4 (section number from memory).
 describe('reflector geometry', () => {
   it('focalLengthM(D, f/D) = (f/D)·D in metres', () => {
     expect(focalLengthM(1.2, 0.4)).toBeCloseTo(0.48, 14);
