@@ -84,7 +84,7 @@ export function buildVerificationRecord(groups: ReferenceGroup[], transcribed: T
 
 const SUPERSCRIPT: Record<string, string> = { '-': '⁻', '0': '⁰', '1': '¹', '2': '²', '3': '³', '4': '⁴', '5': '⁵', '6': '⁶', '7': '⁷', '8': '⁸', '9': '⁹' };
 
-/** A number for the record: up to 12 significant digits, exponent form for very small or large. */
+/** A number for the record: up to 12 significant digits, exponent form for very small or large, true minus sign. */
 export function formatRecordNumber(value: number | null): string {
   if (value === null || !Number.isFinite(value)) return '—';
   if (value === 0) return '0';
@@ -92,7 +92,21 @@ export function formatRecordNumber(value: number | null): string {
   if (abs < 1e-4 || abs >= 1e9) {
     const [mantissa, exponent] = value.toExponential(3).split('e');
     const sup = [...String(Number(exponent))].map((ch) => SUPERSCRIPT[ch] ?? ch).join('');
-    return `${Number(mantissa)} × 10${sup}`;
+    return `${String(Number(mantissa)).replace('-', '−')} × 10${sup}`;
   }
-  return String(Number(value.toPrecision(12)));
+  return String(Number(value.toPrecision(12))).replace('-', '−');
+}
+
+/**
+ * A computed value for the record, with the digits its tolerance makes meaningful: one decimal
+ * below the tolerance's leading digit (a check to ±0.1 shows 2 decimals, not 12 digits), never
+ * more than formatRecordNumber shows.
+ */
+export function formatComputedNumber(value: number | null, tolerance: number): string {
+  if (value === null || !Number.isFinite(value) || !(tolerance > 0)) return formatRecordNumber(value);
+  const decimals = Math.max(0, Math.ceil(-Math.log10(tolerance)) + 1);
+  const full = formatRecordNumber(value);
+  if (Math.abs(value) < 1e-4 || Math.abs(value) >= 1e9 || decimals > 12) return full;
+  const short = formatRecordNumber(Number(value.toFixed(decimals)));
+  return short.length < full.length ? short : full;
 }

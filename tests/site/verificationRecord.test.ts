@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { referenceGroups } from '../reference/index';
-import { buildVerificationRecord, formatRecordNumber } from '../../site/lib/verificationRecord';
+import { buildVerificationRecord, formatComputedNumber, formatRecordNumber } from '../../site/lib/verificationRecord';
 import { caseUnit, type ReferenceGroup } from '../reference/referenceCase';
 import { transcribedGroups } from '../reference/transcribed';
 
@@ -58,5 +58,15 @@ describe('verification record data (site/lib/verificationRecord.ts)', () => {
     expect(formatRecordNumber(2 / 3)).toBe('0.666666666667');
     expect(formatRecordNumber(null)).toBe('—');
     expect(formatRecordNumber(0)).toBe('0');
+    expect(formatRecordNumber(-2.678946706226)).toBe('−2.67894670623');
+  });
+
+  it('shows a computed value with the digits its tolerance supports, not 12', () => {
+    expect(formatComputedNumber(0.885893500457, 0.886e-3)).toBe('0.88589'); // ±0.000886: 5 decimals
+    expect(formatComputedNumber(66.15948829687, 7)).toBe('66.2'); // ±7: 1 decimal
+    expect(formatComputedNumber(-13.2619, 0.01)).toBe('−13.262');
+    expect(formatComputedNumber(2 / 3, 1e-12)).toBe('0.666666666667'); // tight tolerance: all 12 digits
+    expect(formatComputedNumber(1.5e-15, 1e-12)).toBe('1.5 × 10⁻¹⁵');
+    expect(formatComputedNumber(null, 0.1)).toBe('—');
   });
 });
