@@ -8,7 +8,7 @@
  * `astro build` stops on a broken formula (an unknown command, a stray control character, or a
  * strict-mode complaint such as Unicode text in maths).
  */
-import type { KatexOptions } from 'katex';
+import katex, { type KatexOptions } from 'katex';
 
 /**
  * KaTeX options: MathML beside the HTML (for screen readers), strict mode as errors, and errors
@@ -53,3 +53,17 @@ export function rehypeFailOnKatexError() {
 
 /** Control characters other than tab, newline and carriage return: never legitimate in a source file. */
 export const CONTROL_CHARACTER = /[\u0000-\u0008\u000b\u000c\u000e-\u001f\u007f]/;
+
+/**
+ * Characters a lost backslash leaves in LaTeX held in a JS string: '\theta' is TAB + "heta", '\nu'
+ * a newline, '\rho' CR, '\varepsilon' VT, '\frac' FF, '\beta' BS, '\approx' BEL. KaTeX renders some
+ * of them without complaint, so formula LaTeX (always a single line) must contain none.
+ */
+export const LOST_BACKSLASH = /[\u0000-\u001f\u007f]/;
+
+/** Renders a calc/ formula's LaTeX at build time; throws (failing the build) on a KaTeX error or a lost backslash. */
+export function renderFormulaLatex(tex: string, displayMode: boolean): string {
+  const at = tex.search(LOST_BACKSLASH);
+  if (at >= 0) throw new Error(`formula LaTeX has control character U+${tex.charCodeAt(at).toString(16).padStart(4, '0')} at ${at} (a lost backslash?): ${JSON.stringify(tex)}`);
+  return katex.renderToString(tex, { ...KATEX_OPTIONS, displayMode });
+}

@@ -5,7 +5,7 @@ import remarkMath from 'remark-math';
 import rehypeKatex from 'rehype-katex';
 import { createMarkdownProcessor } from '@astrojs/markdown-remark';
 import { describe, expect, it } from 'vitest';
-import { CONTROL_CHARACTER, KATEX_OPTIONS, rehypeFailOnKatexError } from '../../site/lib/mathRendering';
+import { CONTROL_CHARACTER, KATEX_OPTIONS, rehypeFailOnKatexError, renderFormulaLatex } from '../../site/lib/mathRendering';
 import { formulaCatalog } from '../../calc/formulaCatalog';
 
 const GUIDE = 'site/pages/guide';
@@ -59,6 +59,14 @@ describe('maths in the guide (site/pages/guide/*.mdx) renders with KaTeX in stri
     for (const f of formulaCatalog) {
       for (const tex of [f.latex, ...f.symbols.map((s) => s.symbol)]) expect(/[\t\n\r\v\f\b\u0007]/.test(tex), `${f.id}: ${JSON.stringify(tex)}`).toBe(false);
     }
+  });
+
+  it('renderFormulaLatex (components/astro/Formula.astro) throws on a lost backslash and on a KaTeX error', () => {
+    expect(renderFormulaLatex('\\theta_0 \\approx 1', true)).toContain('class="katex');
+    expect(() => renderFormulaLatex('\theta_0', true)).toThrow(/control character U\+0009/); // '\t' + "heta_0": KaTeX alone renders it
+    expect(() => katex.renderToString('\theta_0', KATEX_OPTIONS)).not.toThrow();
+    expect(() => renderFormulaLatex('D \u0007pprox 1', false)).toThrow(/U\+0007/);
+    expect(() => renderFormulaLatex('\\notacommand', false)).toThrow();
   });
 
   it('the extractor finds the maths it should (inline and display)', () => {
