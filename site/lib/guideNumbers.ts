@@ -122,7 +122,7 @@ const SECTOR_DESIGN_HZ = 5.8e9;
 const sectorHz = (heightWavelengths: number) => (SECTOR_DESIGN_HZ * heightWavelengths) / 0.25;
 
 const line32 = (scanDeg: number): ArraySpec => ({ geometry: { kind: 'linear', count: 32, spacingWavelengths: 0.5 }, steering: { thetaDeg: scanDeg, phiDeg: 0 } });
-const scan32 = Object.fromEntries([0, 30, 45, 60].map((s) => [s, figures(line32(s))])) as Record<0 | 30 | 45, () => FiguresOfMerit> & Record<60, () => FiguresOfMerit>;
+const scan32: Record<0 | 30 | 45 | 60, () => FiguresOfMerit> = { 0: figures(line32(0)), 30: figures(line32(30)), 45: figures(line32(45)), 60: figures(line32(60)) };
 const hpbw32 = (s: 0 | 30 | 45 | 60) => need(scan32[s]().theta.hpbwDeg, 'HPBW');
 const quantized = (bits: number) => memo(() => phaseQuantizationEffect(line32(20), bits));
 const bits = { 3: quantized(3), 4: quantized(4), 5: quantized(5) };
