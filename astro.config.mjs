@@ -5,6 +5,7 @@ import mdx from '@astrojs/mdx';
 import { searchIndex } from './scripts/searchIndexIntegration.ts';
 import remarkMath from 'remark-math';
 import rehypeKatex from 'rehype-katex';
+import { KATEX_OPTIONS, rehypeFailOnKatexError } from './site/lib/mathRendering.ts';
 
 const base = process.env.BASE || '/';
 
@@ -16,8 +17,9 @@ export default defineConfig({
   trailingSlash: 'ignore',
   output: 'static',
   integrations: [svelte(), mdx(), searchIndex()],
-  // Inline $…$ and display $$…$$ maths in Markdown/MDX, rendered to HTML by KaTeX at build time.
-  markdown: { remarkPlugins: [remarkMath], rehypePlugins: [[rehypeKatex, { output: 'htmlAndMathml', strict: 'ignore' }]] },
+  // Inline $…$ and display $$…$$ maths in Markdown/MDX, rendered to HTML by KaTeX at build time;
+  // any KaTeX error (strict mode included) fails the build (site/lib/mathRendering.ts).
+  markdown: { remarkPlugins: [remarkMath], rehypePlugins: [[rehypeKatex, KATEX_OPTIONS], rehypeFailOnKatexError] },
   build: { format: 'directory', inlineStylesheets: 'never' },
   devToolbar: { enabled: false },
   prefetch: false,

@@ -49,7 +49,7 @@ export const endFirePhaseFormula = defineFormula({
     { symbol: 'h', meaning: '1 for the Hansen–Woodyard excess phase, 0 for ordinary end-fire', unit: '' },
   ],
   validity: 'Beam along the array axis toward the lagging elements; 2.92/N ≈ π/N is the Hansen–Woodyard excess phase.',
-  source: 'Balanis, Antenna Theory, 4th ed., §6.3 (ordinary) and §6.4 (Hansen–Woodyard; Hansen & Woodyard, Proc. IRE, 1938).',
+  source: 'Balanis, Antenna Theory, 4th ed., §6.3 (section number from memory; ordinary) and §6.4 (section number from memory; Hansen–Woodyard; Hansen & Woodyard, Proc. IRE, 1938).',
   argNames: ['count', 'spacingWavelengths', 'hansenWoodyard'],
   evaluate: ({ count, spacingWavelengths, hansenWoodyard }) => radToDeg(endFirePhaseStepRad(kindOf(hansenWoodyard), count, spacingWavelengths)),
   example: { args: { count: 10, spacingWavelengths: 0.25, hansenWoodyard: 0 }, expected: -90, tolerance: 1e-12, source: '−kd = −360° × 0.25 = −90°, hand-worked' },
@@ -69,10 +69,10 @@ export const endFireDirectivityFormula = defineFormula({
     { symbol: 'd', meaning: 'element spacing', unit: 'm' },
   ],
   validity: 'Isotropic elements, uniform amplitudes, no mutual coupling; exact for that model (the sin x/x term is 1 for m = n).',
-  source: 'IEEE Std 145 definition of directivity; the closed form is the sphere integral of |AF|² (Hansen, Phased Array Antennas, 2nd ed., ch. 2); checked against SciPy quadrature (scripts/fixtures/end_fire.py).',
+  source: 'IEEE Std 145 definition of directivity; the closed form is the sphere integral of |AF|² (Hansen, Phased Array Antennas, 2nd ed., ch. 2 (chapter number from memory)); checked against SciPy quadrature (scripts/fixtures/end_fire.py).',
   argNames: ['count', 'spacingWavelengths', 'hansenWoodyard'],
   evaluate: ({ count, spacingWavelengths, hansenWoodyard }) => powerRatioToDb(endFireDirectivity(kindOf(hansenWoodyard), count, spacingWavelengths)),
-  example: { args: { count: 10, spacingWavelengths: 0.25, hansenWoodyard: 0 }, expected: 10, tolerance: 1e-9, source: 'ordinary end-fire at d = λ/4: every cross term vanishes, D = N (Balanis, Antenna Theory, 4th ed., §6.3)' },
+  example: { args: { count: 10, spacingWavelengths: 0.25, hansenWoodyard: 0 }, expected: 10, tolerance: 1e-9, source: 'ordinary end-fire at d = λ/4: every cross term vanishes, D = N (Balanis, Antenna Theory, 4th ed., §6.3 (section number from memory))' },
 });
 
 /** Ordinary end-fire, D ≈ 4L/λ. */
@@ -86,7 +86,7 @@ export const ordinaryEndFireApproxFormula = defineFormula({
     { symbol: '\\lambda', meaning: 'free-space wavelength', unit: 'm' },
   ],
   validity: 'Long arrays (L ≫ λ) with d < λ/2; exact at d = λ/4 when L is taken as N·d.',
-  source: 'Balanis, Antenna Theory, 4th ed., §6.3 (D₀ ≈ 4N d/λ ≈ 4L/λ).',
+  source: 'Balanis, Antenna Theory, 4th ed., §6.3 (section number from memory; D₀ ≈ 4N d/λ ≈ 4L/λ).',
   argNames: ['lengthWavelengths'],
   evaluate: ({ lengthWavelengths }) => powerRatioToDb(ordinaryEndFireApproxDirectivity(lengthWavelengths)),
   example: { args: { lengthWavelengths: 2.5 }, expected: 10, tolerance: 1e-12, source: '10 log10(4 × 2.5) = 10 dBi, hand-worked' },
@@ -103,7 +103,7 @@ export const hansenWoodyardApproxFormula = defineFormula({
     { symbol: '\\lambda', meaning: 'free-space wavelength', unit: 'm' },
   ],
   validity: 'Long arrays only; for short arrays the exact value (shown) can differ by more than a decibel.',
-  source: 'Balanis, Antenna Theory, 4th ed., §6.4 (D₀ ≈ 1.805 · 4L/λ, about 2.56 dB above ordinary end-fire).',
+  source: 'Balanis, Antenna Theory, 4th ed., §6.4 (section number from memory; D₀ ≈ 1.805 · 4L/λ, about 2.56 dB above ordinary end-fire).',
   argNames: ['lengthWavelengths'],
   evaluate: ({ lengthWavelengths }) => powerRatioToDb(hansenWoodyardApproxDirectivity(lengthWavelengths)),
   example: { args: { lengthWavelengths: 10 }, expected: 10 * Math.log10(72.2), tolerance: 1e-12, source: '10 log10(1.805 × 40) = 18.59 dBi, hand-worked' },
@@ -124,7 +124,7 @@ export const yagiGainFormula = defineFormula({
   source: 'P. P. Viezbicke, "Yagi Antenna Design", NBS Technical Note 688, 1976 (table values recalled from memory); interpolation linear in log10(boom) is our choice.',
   argNames: ['boomWavelengths'],
   evaluate: ({ boomWavelengths }) => yagiGainDbd(boomWavelengths).gainDbd,
-  example: { args: { boomWavelengths: 2.2 }, expected: 12.25, tolerance: 1e-12, source: 'NBS TN 688 tabulated value at 2.2 λ (from memory)' },
+  example: { args: { boomWavelengths: Math.sqrt(1.2 * 2.2) }, expected: 11.225, tolerance: 1e-12, source: 'Interpolation linear in log10(boom), worked by hand at the geometric mean of the 1.2 λ and 2.2 λ rows: the mean of their gains, (10.2 + 12.25)/2 dBd (table values transcribed from memory)' },
 });
 
 /** Square aperture of side L: 4π L²/λ². */
@@ -138,7 +138,7 @@ export const squareApertureFormula = defineFormula({
     { symbol: '\\lambda', meaning: 'free-space wavelength', unit: 'm' },
   ],
   validity: 'Uniform illumination, aperture many wavelengths across, efficiency 100 %; real apertures reach 50–80 % of it.',
-  source: 'Balanis, Antenna Theory, 4th ed., ch. 12 (maximum directivity 4πA/λ² of a uniform aperture).',
+  source: 'Balanis, Antenna Theory, 4th ed., ch. 12 (chapter number from memory; maximum directivity 4πA/λ² of a uniform aperture).',
   argNames: ['lengthWavelengths'],
   evaluate: ({ lengthWavelengths }) => powerRatioToDb(squareApertureDirectivity(lengthWavelengths)),
   example: { args: { lengthWavelengths: 1 }, expected: 10 * Math.log10(4 * Math.PI), tolerance: 1e-12, source: '10 log10(4π) = 10.99 dBi, hand-worked' },
@@ -154,7 +154,7 @@ export const hpbwFromDirectivityFormula = defineFormula({
     { symbol: 'D', meaning: 'directivity (linear)', unit: '' },
   ],
   validity: 'A single main beam with small sidelobes and equal E- and H-plane widths; real Yagis are a little narrower in the E-plane.',
-  source: 'Balanis, Antenna Theory, 4th ed., §2.7 (Kraus\'s approximation D ≈ 41 253/(θ₁θ₂), angles in degrees).',
+  source: 'Balanis, Antenna Theory, 4th ed., §2.7 (section number from memory; Kraus\'s approximation D ≈ 41 253/(θ₁θ₂), angles in degrees).',
   argNames: ['directivity'],
   evaluate: ({ directivity }) => hpbwFromDirectivityDeg(directivity),
   example: { args: { directivity: 41253 / 900 }, expected: 30, tolerance: 1e-3, source: '√(41 253 / 45.84) = 30°, hand-worked' },

@@ -18,8 +18,8 @@ export function reciprocalRadiusFactor(lattice: Lattice): number {
  * Largest spacing, in wavelengths, that keeps every grating lobe out of visible space for scans
  * up to scanMaxDeg from broadside in any plane.
  * Rectangular: d/λ ≤ 1/(1 + sin θmax). Equilateral triangular: d/λ ≤ (2/√3)/(1 + sin θmax).
- * Source: Mailloux, "Phased Array Antenna Handbook", 2nd ed., §2.1 (grating-lobe conditions
- * for rectangular and triangular grids); Skolnik, "Radar Handbook", 3rd ed., ch. 13.
+ * Source: Mailloux, "Phased Array Antenna Handbook", 2nd ed., §2.1 (section number from memory; grating-lobe conditions
+ * for rectangular and triangular grids); Skolnik, "Radar Handbook", 3rd ed., ch. 13 (chapter number from memory).
  */
 export function maxGratingFreeSpacingWavelengths(scanMaxDeg: number, lattice: Lattice): number {
   requireInRange('scanMaxDeg', scanMaxDeg, 0, 90, '°');

@@ -108,7 +108,7 @@ export const apertureExposureFormula = defineFormula({
     { symbol: 'G', meaning: 'gain η(πD/λ)² (linear)', unit: '' },
   ],
   validity: 'Circular aperture antennas on the beam axis; conservative estimates, not a field computation. At the surface the density can reach 4P/A.',
-  source: 'FCC OET Bulletin 65, Edition 97-01 (1997), §2, equations for aperture antennas.',
+  source: 'FCC OET Bulletin 65, Edition 97-01 (1997), §2 (section number from memory), equations for aperture antennas.',
   argNames: ['transmitPowerW', 'apertureDiameterM', 'apertureEfficiency', 'frequencyHz', 'limitWPerM2'],
   evaluate: (a) => apertureDistanceToLimitM(a.transmitPowerW, a.apertureDiameterM, a.apertureEfficiency, a.frequencyHz, a.limitWPerM2),
   example: {
@@ -129,7 +129,7 @@ export const farFieldBoundaryFormula = defineFormula({
     { symbol: '\\lambda', meaning: 'free-space wavelength', unit: 'm' },
   ],
   validity: 'Apertures large compared with λ; the π/8 phase criterion.',
-  source: 'IEEE Std 149-2021, IEEE Recommended Practice for Antenna Measurements, far-field criterion; Balanis, Antenna Theory, 4th ed., §2.2.4 (section number from memory).',
+  source: 'IEEE Std 149-2021, IEEE Recommended Practice for Antenna Measurements (far-field criterion); Balanis, Antenna Theory, 4th ed., §2.2.4 (section number from memory).',
   argNames: ['apertureDiameterM', 'frequencyHz'],
   evaluate: ({ apertureDiameterM, frequencyHz }) => farFieldBoundaryM(apertureDiameterM, frequencyHz),
   example: { args: { apertureDiameterM: 3, frequencyHz: 299_792_458 * 10 }, expected: 180, tolerance: 1e-9, source: 'hand-worked: λ = 0.1 m, 2·9/0.1 = 180 m' },

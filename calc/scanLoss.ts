@@ -73,7 +73,7 @@ export function apertureDirectivity(areaM2: number, wavelengthM: number): number
 /**
  * Power array factor of a uniform line of N isotropic elements at spacing d/λ steered to θ0,
  * at θ (both from broadside, in the scan plane): [sin(Nψ/2) / (N sin(ψ/2))]², ψ = 2π(d/λ)(sin θ − sin θ0).
- * Balanis, Antenna Theory, 4th ed., §6.3 (normalized array factor of a uniform array).
+ * Balanis, Antenna Theory, 4th ed., §6.3 (section number from memory; normalized array factor of a uniform array).
  */
 export function uniformLinePowerPattern(count: number, spacingWavelengths: number, scanRad: number, thetaRad: number): number {
   const psi = 2 * Math.PI * spacingWavelengths * (Math.sin(thetaRad) - Math.sin(scanRad));

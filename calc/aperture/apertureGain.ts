@@ -4,7 +4,7 @@
  * G = η (πD/λ)². With η = 1 it is the directivity of a uniform, in-phase aperture with a forward
  * (one-sided) pattern; η collects the taper, spillover, phase, blockage and loss factors.
  * Sources: IEEE Std 145-2013 (aperture efficiency, gain); C. A. Balanis, Antenna Theory: Analysis
- * and Design, 4th ed., Wiley, 2016, §12.5 and §15.4 (section numbers from memory); W. L. Stutzman
+ * and Design, 4th ed., Wiley, 2016, §12.5 and §15.4 (each section number from memory); W. L. Stutzman
  * and G. A. Thiele, Antenna Theory and Design, 3rd ed., Wiley, 2012, ch. 7 (chapter number from memory).
  */
 import { requireInRange, requirePositive } from '../errors';

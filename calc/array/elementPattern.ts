@@ -21,7 +21,7 @@ export function validateElementPattern(element: ElementPattern): ElementPattern 
  * Element field pattern (real amplitude, peak 1 for the element alone) in the direction with
  * direction cosines (u, v, w) = (sin θ cos φ, sin θ sin φ, cos θ):
  * isotropic 1; cosine: w^n for w ≥ 0 and 0 behind; half-wave dipole along axis a with
- * cos ψ = û·â: cos((π/2) cos ψ)/sin ψ (Balanis, "Antenna Theory", 4th ed., eq. 4-84).
+ * cos ψ = û·â: cos((π/2) cos ψ)/sin ψ (Balanis, "Antenna Theory", 4th ed., eq. 4-84 (equation number from memory)).
  * With a ground plane at height h the pattern is multiplied by the image factor: the dipole
  * along z is vertical, every other element is treated as horizontal.
  */

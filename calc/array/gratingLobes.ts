@@ -33,7 +33,7 @@ export function reciprocalVectors(vectorsWavelengths: Array<[number, number]>): 
 /**
  * Directions of the grating lobes inside visible space (u² + v² ≤ 1) for lattice vectors in λ
  * and beam direction (θ0, φ0): û0 + p b1 + q b2 with (p, q) ≠ (0, 0) (Mailloux, "Phased Array
- * Antenna Handbook", 2nd ed., §2.1). For a line along x the lobe cone is reported where it
+ * Antenna Handbook", 2nd ed., §2.1 (section number from memory)). For a line along x the lobe cone is reported where it
  * crosses the plane through the beam (v = v0).
  */
 export function gratingLobeDirections(vectorsWavelengths: Array<[number, number]>, beam: DirectionDeg): GratingLobe[] {
@@ -100,7 +100,7 @@ function nearestReplicaDistance(vectorsWavelengths: Array<[number, number]>, bea
  * Distance in direction cosines from (u, v) to the nearest grating-lobe centre û0 + p·b1 + q·b2,
  * (p, q) ≠ (0, 0), visible or not (along the line for a line array). A pattern maximum closer to a
  * grating-lobe centre than the main beam's first null is to û0 belongs to that grating lobe: the
- * array factor repeats the main beam there (Mailloux, "Phased Array Antenna Handbook", 2nd ed., §2.1).
+ * array factor repeats the main beam there (Mailloux, "Phased Array Antenna Handbook", 2nd ed., §2.1 (section number from memory)).
  */
 export function distanceToGratingLobe(vectorsWavelengths: Array<[number, number]>, beamUv: [number, number], pointUv: [number, number]): number {
   return nearestReplicaDistance(vectorsWavelengths, beamUv, pointUv, (p, q) => p !== 0 || q !== 0);

@@ -13,7 +13,7 @@ export function sinc(x: number): number {
  * complex weights w_n, toward direction cosine u = sin θ cos φ:
  * D = |Σ w_n e^{jkd n u}|² / Σ_m Σ_n w_m w_n* sin(kd(m−n))/(kd(m−n)).
  * The denominator is the average radiation intensity (∫ e^{jk r·û} dΩ = 4π sin(kr)/(kr));
- * e.g. Hansen, "Phased Array Antennas", 2nd ed., ch. 2 (directivity of a linear array).
+ * e.g. Hansen, "Phased Array Antennas", 2nd ed., ch. 2 (chapter number from memory; directivity of a linear array).
  */
 export function linearArrayDirectivity(weights: ComplexWeights, spacingWavelengths: number, directionCosineU: number): number {
   const count = requireElementCount('weights.length', weights.re.length);

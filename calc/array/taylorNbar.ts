@@ -5,7 +5,7 @@ import { taylorLineSourceSidelobeDb, taylorParameterA } from './taylorLineSource
 /**
  * The usual smallest n̄ for a Taylor taper of design level sidelobeDb (positive dB):
  * n̄ ≥ 2A² + ½ with A = acosh(10^(sidelobeDb/20))/π (T. T. Taylor, IRE Trans. AP-3, 1955;
- * R. C. Hansen, "Phased Array Antennas", 2nd ed., ch. 3, from memory). Checked against computed
+ * R. C. Hansen, "Phased Array Antennas", 2nd ed., ch. 3 (chapter number from memory)). Checked against computed
  * line-source patterns (tests/calc/array/taylorNbar.test.ts, SciPy fixture): from 20 to 50 dB this
  * n̄ always reaches the design level within 0.5 dB, and is 1 to 2 above the smallest n̄ that does
  * (30 dB: rule 4, smallest 3). It is a safe choice, not a bound: a smaller n̄ may still work.

@@ -16,7 +16,7 @@ export type DipoleKind = 'short' | 'halfWave';
  * Field pattern (real amplitude) of a horizontal dipole along x toward (u, v, w), times the
  * image factor 2 sin(2π h w) when a plane is present (h in λ; zero below the plane):
  * short dipole sin ψ = √(1 − u²); half-wave dipole from the array engine's elementFieldAt
- * (Balanis, "Antenna Theory", 4th ed., eq. 4-84) with its ground-plane image.
+ * (Balanis, "Antenna Theory", 4th ed., eq. 4-84 (equation number from memory)) with its ground-plane image.
  */
 export function horizontalDipoleFieldAt(kind: DipoleKind, heightWavelengths: number | null, u: number, v: number, w: number): number {
   if (kind === 'halfWave') {

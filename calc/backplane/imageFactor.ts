@@ -7,7 +7,7 @@
  * conductor, with k_s = k0 √εr and θ_s the ray angle in the spacer (Snell: sin θ_s = sin θ/√εr).
  * The far field is the radiator's own field times the image factor
  *   |F| = |2 sin(k_s h cos θ_s)| = |2 sin(k0 h √(εr − sin² θ))|.
- * For εr = 1 this is the exact image factor (Balanis, "Antenna Theory", 4th ed., §4.7); for
+ * For εr = 1 this is the exact image factor (Balanis, "Antenna Theory", 4th ed., §4.7 (section number from memory)); for
  * εr > 1 it is a single-ray approximation: reflections at the spacer–air surface, the Fresnel
  * transmission factors and surface waves are ignored. At broadside (normal incidence) the phase
  * through the spacer is exact for that ray.

@@ -162,8 +162,8 @@ export function createArchitectureSizingCalculator(conventions: TeamConventions)
     ],
     references: [
       'R. J. Mailloux, Phased Array Antenna Handbook, 2nd ed., Artech House, 2005.',
-      'C. A. Balanis, Antenna Theory, 4th ed., Wiley, 2016, ch. 6 and 15.',
-      'W. L. Stutzman and G. A. Thiele, Antenna Theory and Design, 3rd ed., Wiley, 2012, §2.4 (gain–beamwidth rule).',
+      'C. A. Balanis, Antenna Theory, 4th ed., Wiley, 2016, ch. 6 and 15 (chapter number from memory).',
+      'W. L. Stutzman and G. A. Thiele, Antenna Theory and Design, 3rd ed., Wiley, 2012, §2.4 (section number from memory; gain–beamwidth rule).',
     ],
     examples: [
       { title: 'Coastal surveillance radar, 9.2–9.6 GHz, 34 dBi at ±45° azimuth', query: '?v=1&f=9.2GHz&fhi=9.6GHz&req=gain&g=34dBi&saz=45deg&sel=0deg&uaz=no&maxsize=2m&eta=0.6&etar=0.8&nexp=1.3&margin=0.05&lat=triangular&ge=6dBi' },

@@ -253,9 +253,9 @@ export function createArrayExplorerCalculator(conventions: TeamConventions, opti
       'Grating lobes are listed for lattice geometries (linear, planar, thinned); rings and Y arms have no lattice and are judged from the pattern.',
     ],
     references: [
-      'R. J. Mailloux, Phased Array Antenna Handbook, 2nd ed., Artech House, 2005, ch. 1–3.',
-      'C. A. Balanis, Antenna Theory: Analysis and Design, 4th ed., Wiley, 2016, ch. 6 and 12.',
-      'R. C. Hansen, Phased Array Antennas, 2nd ed., Wiley, 2009, ch. 2–3.',
+      'R. J. Mailloux, Phased Array Antenna Handbook, 2nd ed., Artech House, 2005, ch. 1–3 (chapter number from memory).',
+      'C. A. Balanis, Antenna Theory: Analysis and Design, 4th ed., Wiley, 2016, ch. 6 and 12 (chapter number from memory).',
+      'R. C. Hansen, Phased Array Antennas, 2nd ed., Wiley, 2009, ch. 2–3 (chapter number from memory).',
       'T. T. Taylor, "Design of line-source antennas for narrow beamwidth and low side lobes", IRE Trans. Antennas Propag., AP-3, 1955.',
       'C. L. Dolph, "A current distribution for broadside arrays which optimizes the relationship between beam width and side-lobe level", Proc. IRE, 34, 1946.',
       'IEEE Std 145-2013, Standard for Definitions of Terms for Antennas.',

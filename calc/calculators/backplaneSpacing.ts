@@ -124,7 +124,7 @@ export function computeBackplaneSpacing(inputs: CalcInputs): CalcResult<Backplan
     warnings.push(warning('spacer-approximation', 'outside-validity', 'With a dielectric spacer the off-broadside factor uses one ray through the spacer (reflections at its surface and Fresnel factors ignored), and the directivity treats the spacer as filling the half-space; broadside figures are exact for that ray.', ['scanLowDb', 'scanHighDb', 'directivityDbi']));
     const te1OnsetHz = 299792458 / (4 * h * Math.sqrt(er - 1));
     if (te1OnsetHz <= bandHighHz) {
-      warnings.push(warning('spacer-surface-waves', 'caution', `The spacer is thick enough for a second surface-wave mode (TE₁ above about ${hzText(te1OnsetHz)}, where h√(εr − 1) = λ0/4; Pozar, Microwave Engineering, 4th ed., §3.6, from memory): much power can leave sideways in the spacer.`, ['directivityDbi']));
+      warnings.push(warning('spacer-surface-waves', 'caution', `The spacer is thick enough for a second surface-wave mode (TE₁ above about ${hzText(te1OnsetHz)}, where h√(εr − 1) = λ0/4; Pozar, Microwave Engineering, 4th ed., §3.6 (section number from memory), from memory): much power can leave sideways in the spacer.`, ['directivityDbi']));
     } else {
       warnings.push(warning('spacer-surface-waves', 'note', 'A dielectric spacer always carries the TM₀ surface wave; it grows with thickness and permittivity and is not in these figures.', ['directivityDbi']));
     }
@@ -254,8 +254,8 @@ export function createBackplaneSpacingCalculator(conventions: TeamConventions): 
       'The flattest spacing minimises the max − min of the broadside image factor across the band; scan and impedance are not in that criterion.',
     ],
     references: [
-      'C. A. Balanis, Antenna Theory: Analysis and Design, 4th ed., Wiley, 2016, §4.6 (half-wave dipole), §4.7 (dipoles above a ground plane, image theory).',
-      'D. M. Pozar, Microwave Engineering, 4th ed., Wiley, 2012, §3.6 (grounded dielectric slab, surface waves).',
+      'C. A. Balanis, Antenna Theory: Analysis and Design, 4th ed., Wiley, 2016, §4.6 (section number from memory; half-wave dipole), §4.7 (section number from memory; dipoles above a ground plane, image theory).',
+      'D. M. Pozar, Microwave Engineering, 4th ed., Wiley, 2012, §3.6 (section number from memory; grounded dielectric slab, surface waves).',
       'IEEE Std 145-2013, IEEE Standard for Definitions of Terms for Antennas.',
     ],
     examples: [

@@ -77,7 +77,7 @@ const STRUCTURE_LABEL: Record<EndFireStructure, string> = {
   yagi: 'Yagi–Uda',
 };
 
-/** Long-array advantage of Hansen–Woodyard over ordinary end-fire, dB (Balanis 4th ed. §6.4). */
+/** Long-array advantage of Hansen–Woodyard over ordinary end-fire, dB (Balanis 4th ed. §6.4 (section number from memory)). */
 const HW_LONG_ADVANTAGE_DB = 10 * Math.log10(HANSEN_WOODYARD_LONG_ARRAY_FACTOR);
 /** Chart samples. */
 const CURVE_SAMPLES = 90;
@@ -342,7 +342,7 @@ export function createEndFireLengthCalculator(conventions: TeamConventions): Cal
       'The broadside comparison is a uniformly illuminated square aperture of side L (100 % efficiency): its directivity grows as L², the end-fire structures only as L.',
     ],
     references: [
-      'C. A. Balanis, Antenna Theory: Analysis and Design, 4th ed., Wiley, 2016, §6.3 (ordinary end-fire), §6.4 (Hansen–Woodyard end-fire), §2.7 (directivity from beamwidths), ch. 12 (apertures).',
+      'C. A. Balanis, Antenna Theory: Analysis and Design, 4th ed., Wiley, 2016, §6.3 (section number from memory; ordinary end-fire), §6.4 (section number from memory; Hansen–Woodyard end-fire), §2.7 (section number from memory; directivity from beamwidths), ch. 12 (chapter number from memory; apertures).',
       'W. W. Hansen and J. R. Woodyard, "A new principle in directional antenna design", Proc. IRE, 26, 1938.',
       'P. P. Viezbicke, "Yagi Antenna Design", NBS Technical Note 688, National Bureau of Standards, 1976.',
       'IEEE Std 145-2013, IEEE Standard for Definitions of Terms for Antennas (directivity, gain, HPBW).',

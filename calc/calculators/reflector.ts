@@ -489,7 +489,7 @@ export function createReflectorCalculator(conventions: TeamConventions): Calcula
       'Safety: a transmitting dish concentrates power far along its beam, and inside 2D²/λ far-field power-density formulas do not hold; exposure is assessed under local regulations by a qualified person.',
     ],
     references: [
-      'C. A. Balanis, Antenna Theory: Analysis and Design, 4th ed., Wiley, 2016, §15.4 (section number from memory) (front-fed paraboloid: geometry, spillover, taper and aperture efficiency).',
+      'C. A. Balanis, Antenna Theory: Analysis and Design, 4th ed., Wiley, 2016, §15.4 (section number from memory; front-fed paraboloid: geometry, spillover, taper and aperture efficiency).',
       'J. Ruze, "Antenna tolerance theory — a review", Proc. IEEE 54(4), 1966.',
       'Y. T. Lo, "On the beam deviation factor of a parabolic reflector", IRE Trans. Antennas Propag., AP-8, 1960.',
       'J. Ruze, "Lateral-feed displacement in a paraboloid", IEEE Trans. Antennas Propag., AP-13, 1965.',

@@ -178,9 +178,9 @@ export function createScanLossCalculator(conventions: TeamConventions): Calculat
       'The cosⁿ model folds mismatch and element effects into n; the current-sheet model is an ideal upper bound on performance, not a real element.',
     ],
     references: [
-      'R. J. Mailloux, Phased Array Antenna Handbook, 2nd ed., Artech House, 2005, §1.1 and §2.1.',
+      'R. J. Mailloux, Phased Array Antenna Handbook, 2nd ed., Artech House, 2005, §1.1 and §2.1 (section number from memory).',
       'H. A. Wheeler, "Simple relations derived from a phased-array antenna made of an infinite current sheet", IEEE Trans. Antennas Propag., AP-13, 1965.',
-      'C. A. Balanis, Antenna Theory, 4th ed., Wiley, 2016, §6.3.',
+      'C. A. Balanis, Antenna Theory, 4th ed., Wiley, 2016, §6.3 (section number from memory).',
     ],
     examples: [
       { title: 'Airport surface-movement panel, 9.4 GHz, ±50°, 0.8 m face, 36 dBi needed at the edge', query: '?v=1&f=9.4GHz&d=0.58lambda&lat=triangular&by=width&w=0.8m&scan=50deg&el=cosine&nexp=1.3&eta=0.75&gt=36dB' },

@@ -249,8 +249,8 @@ export function createWavelengthSpacingCalculator(conventions: TeamConventions):
       'The in-medium wavelength assumes a lossless, non-magnetic, homogeneous medium.',
     ],
     references: [
-      'R. J. Mailloux, Phased Array Antenna Handbook, 2nd ed., Artech House, 2005, §2.1.',
-      'M. I. Skolnik (ed.), Radar Handbook, 3rd ed., McGraw-Hill, 2008, ch. 13.',
+      'R. J. Mailloux, Phased Array Antenna Handbook, 2nd ed., Artech House, 2005, §2.1 (section number from memory).',
+      'M. I. Skolnik (ed.), Radar Handbook, 3rd ed., McGraw-Hill, 2008, ch. 13 (chapter number from memory).',
       'E. D. Sharp, "A triangular arrangement of planar-array elements that reduces the number needed", IRE Trans. Antennas Propag., AP-9, 1961.',
       'BIPM, The International System of Units (SI Brochure), 9th ed., 2019.',
     ],

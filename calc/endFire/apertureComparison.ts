@@ -1,7 +1,7 @@
 /**
  * The broadside comparison for an end-fire structure of length L: a uniformly illuminated
  * square aperture of side L (same length, area L²), D = 4π L²/λ² (Balanis, "Antenna Theory",
- * 4th ed., §12.5: the maximum directivity of a uniform aperture, 4πA/λ², for apertures many λ across).
+ * 4th ed., §12.5 (section number from memory): the maximum directivity of a uniform aperture, 4πA/λ², for apertures many λ across).
  */
 import { requirePositive } from '../errors';
 

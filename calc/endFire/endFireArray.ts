@@ -18,7 +18,7 @@ export type EndFireArrayKind = 'ordinary' | 'hansenWoodyard';
 /** Largest element count the end-fire tools accept (directivity and HPBW stay fast in a browser). */
 export const MAX_END_FIRE_ELEMENTS = 4000;
 
-/** Ratio of Hansen–Woodyard to ordinary end-fire directivity for long arrays, 1.805 (Balanis, "Antenna Theory", 4th ed., §6.4). */
+/** Ratio of Hansen–Woodyard to ordinary end-fire directivity for long arrays, 1.805 (Balanis, "Antenna Theory", 4th ed., §6.4 (section number from memory)). */
 export const HANSEN_WOODYARD_LONG_ARRAY_FACTOR = 1.805;
 
 /**
@@ -65,13 +65,13 @@ export function endFireHpbwDeg(kind: EndFireArrayKind, count: number, spacingWav
   return metrics.theta.hpbwDeg ?? null;
 }
 
-/** Ordinary end-fire, long array: D ≈ 4L/λ (Balanis, "Antenna Theory", 4th ed., §6.3, eq. for D0 ≈ 4N d/λ ≈ 4L/λ). */
+/** Ordinary end-fire, long array: D ≈ 4L/λ (Balanis, "Antenna Theory", 4th ed., §6.3 (section number from memory), eq. for D0 ≈ 4N d/λ ≈ 4L/λ). */
 export function ordinaryEndFireApproxDirectivity(lengthWavelengths: number): number {
   requirePositive('lengthWavelengths', lengthWavelengths, 'λ');
   return 4 * lengthWavelengths;
 }
 
-/** Hansen–Woodyard, long array: D ≈ 1.805 · 4L/λ (Balanis, "Antenna Theory", 4th ed., §6.4). */
+/** Hansen–Woodyard, long array: D ≈ 1.805 · 4L/λ (Balanis, "Antenna Theory", 4th ed., §6.4 (section number from memory)). */
 export function hansenWoodyardApproxDirectivity(lengthWavelengths: number): number {
   requirePositive('lengthWavelengths', lengthWavelengths, 'λ');
   return HANSEN_WOODYARD_LONG_ARRAY_FACTOR * 4 * lengthWavelengths;
@@ -85,7 +85,7 @@ export function endFireApproxDirectivity(kind: EndFireArrayKind, lengthWavelengt
 /**
  * Spacing limit of the end-fire condition (λ): ordinary end-fire needs d < λ/2, or a second,
  * equal beam appears toward −x; Hansen–Woodyard needs d ≤ (N − 1)λ/(4N) so that |ψ| ≤ π at
- * θ = 180° and the back lobe stays small (Balanis, "Antenna Theory", 4th ed., §6.3–6.4).
+ * θ = 180° and the back lobe stays small (Balanis, "Antenna Theory", 4th ed., §6.3–6.4 (section number from memory)).
  */
 export function endFireSpacingLimitWavelengths(kind: EndFireArrayKind, count: number): number {
   return kind === 'ordinary' ? 0.5 : (count - 1) / (4 * count);

@@ -32,7 +32,7 @@ export function stackingDistanceWavelengths(hpbwDeg: number): number {
 /**
  * HPBW (degrees) of a beam with equal E- and H-plane widths and directivity D, from the
  * beam-area estimate D ≈ 41 253 / (θ_E θ_H) with both in degrees (41 253 = 4π (180/π)²;
- * Kraus, "Antennas", 2nd ed., §2-13; an estimate for a single main beam without large sidelobes).
+ * Kraus, "Antennas", 2nd ed., §2-13 (section number from memory); an estimate for a single main beam without large sidelobes).
  */
 export function hpbwFromDirectivityDeg(directivity: number): number {
   requirePositive('directivity', directivity);

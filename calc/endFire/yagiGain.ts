@@ -3,7 +3,7 @@
  * P. P. Viezbicke, "Yagi Antenna Design", NBS Technical Note 688, National Bureau of Standards,
  * 1976, table of optimised element lengths for six Yagi–Uda antennas (boom 0.4 λ to 4.2 λ).
  * The six gain values below are FROM MEMORY (as the table is commonly reproduced, e.g. in
- * Balanis, "Antenna Theory", ch. 10); they were not re-checked against the publication here.
+ * Balanis, "Antenna Theory", ch. 10 (chapter number from memory)); they were not re-checked against the publication here.
  * Between the tabulated booms the gain is interpolated linearly in log10(boom length); outside
  * them the end segment's slope is extended and the result is flagged as an extrapolation.
  */

@@ -33,7 +33,7 @@ export function farFieldBoundaryM(apertureDiameterM: number, frequencyHz: number
 
 /**
  * Conservative on-axis power-density model of a circular aperture, after FCC OET Bulletin 65,
- * Edition 97-01 (1997), §2 "Aperture antennas":
+ * Edition 97-01 (1997), §2 (section number from memory) "Aperture antennas":
  * - at the surface, at most 4P/A (uniform illumination);
  * - near field (R ≤ D²/(4λ)): S_nf = 16ηP/(πD²);
  * - transition (D²/(4λ) < R < 0.6D²/λ): S_nf · R_nf / R;

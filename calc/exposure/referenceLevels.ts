@@ -25,13 +25,13 @@ export interface ReferenceLevelSet {
 const MHz = 1e6;
 
 /**
- * ICNIRP 2020 (Health Phys. 118(5):483–524), Table 5, whole-body average incident power density.
- * FCC 47 CFR §1.1310(e), Table 1 (MPE limits; 1 mW/cm² = 10 W/m²).
+ * ICNIRP 2020 (Health Phys. 118(5):483–524), Table 5 (table number from memory), whole-body average incident power density.
+ * FCC 47 CFR §1.1310(e), Table 1 (table number from memory; MPE limits; 1 mW/cm² = 10 W/m²).
  */
 export const REFERENCE_LEVEL_SETS: ReferenceLevelSet[] = [
   {
     id: 'icnirp2020-public',
-    guideline: 'ICNIRP Guidelines 2020 (Health Phys. 118(5)), Table 5, whole-body average',
+    guideline: 'ICNIRP Guidelines 2020 (Health Phys. 118(5)), Table 5 (table number from memory), whole-body average',
     population: 'general public',
     minHz: 30 * MHz,
     maxHz: 300e9,
@@ -41,7 +41,7 @@ export const REFERENCE_LEVEL_SETS: ReferenceLevelSet[] = [
   },
   {
     id: 'icnirp2020-occupational',
-    guideline: 'ICNIRP Guidelines 2020 (Health Phys. 118(5)), Table 5, whole-body average',
+    guideline: 'ICNIRP Guidelines 2020 (Health Phys. 118(5)), Table 5 (table number from memory), whole-body average',
     population: 'occupational',
     minHz: 30 * MHz,
     maxHz: 300e9,
@@ -51,7 +51,7 @@ export const REFERENCE_LEVEL_SETS: ReferenceLevelSet[] = [
   },
   {
     id: 'fcc-general',
-    guideline: 'US FCC 47 CFR §1.1310, Table 1, general population/uncontrolled exposure',
+    guideline: 'US FCC 47 CFR §1.1310, Table 1 (table number from memory), general population/uncontrolled exposure',
     population: 'general public',
     minHz: 30 * MHz,
     maxHz: 100e9,
@@ -61,7 +61,7 @@ export const REFERENCE_LEVEL_SETS: ReferenceLevelSet[] = [
   },
   {
     id: 'fcc-occupational',
-    guideline: 'US FCC 47 CFR §1.1310, Table 1, occupational/controlled exposure',
+    guideline: 'US FCC 47 CFR §1.1310, Table 1 (table number from memory), occupational/controlled exposure',
     population: 'occupational',
     minHz: 30 * MHz,
     maxHz: 100e9,

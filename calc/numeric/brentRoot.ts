@@ -1,5 +1,5 @@
 /**
- * Brent's method (Brent 1973, "Algorithms for Minimization without Derivatives", ch. 4):
+ * Brent's method (Brent 1973, "Algorithms for Minimization without Derivatives", ch. 4 (chapter number from memory)):
  * a root of f in [a, b] where f(a) and f(b) differ in sign. Returns NaN-free results only:
  * throws if the bracket does not hold a sign change.
  */

@@ -2,7 +2,7 @@
  * The feed model of calc/reflector: a rotationally symmetric POWER pattern
  *   P(ψ) = cos^q ψ  for 0 ≤ ψ < 90°,  0 beyond,
  * with q the power-pattern exponent (the field pattern is then cos^(q/2) ψ). This is the form of
- * Balanis, Antenna Theory, 4th ed., §15.4 (section number from memory) (G_f = 2(n+1)cos^n θ′, a gain = power pattern).
+ * Balanis, Antenna Theory, 4th ed., §15.4 (section number from memory; G_f = 2(n+1)cos^n θ′, a gain = power pattern).
  * Everywhere in calc/reflector, "q" means this power exponent.
  */
 import { requireInRange, requireNonNegative, CalcInputError } from '../errors';

@@ -6,7 +6,7 @@ import { lineCountForHpbw, sizingSpacingM } from './planarCandidate';
 /**
  * Beamwidth of an element of gain G (linear) with equal principal-plane beamwidths, degrees, by
  * the rule G ≈ 32 400/(θ₁θ₂) (common practice for real antennas; Stutzman & Thiele, Antenna
- * Theory and Design, 3rd ed., §2.4 give 32 400 as the practical constant).
+ * Theory and Design, 3rd ed., §2.4 (section number from memory) give 32 400 as the practical constant).
  */
 export function elementBeamwidthDeg(elementGainDbi: number): number {
   return Math.sqrt(32_400 / 10 ** (elementGainDbi / 10));

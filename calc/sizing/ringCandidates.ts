@@ -17,7 +17,7 @@ type SparseKind = 'ring' | 'y';
 /**
  * First sidelobe of a continuous uniformly excited ring, dB: its pattern is J0(ka sin θ), whose
  * first sidelobe peak sits at the first zero of J1 (x = 3.8317), giving 20·log10|J0(3.8317)|
- * = −7.9 dB (Balanis, Antenna Theory, 4th ed., §6.10).
+ * = −7.9 dB (Balanis, Antenna Theory, 4th ed., §6.10 (section number from memory)).
  */
 export const RING_FIRST_SIDELOBE_DB = 20 * Math.log10(Math.abs(besselJ0(3.8317059702075125)));
 

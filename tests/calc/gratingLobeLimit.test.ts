@@ -3,19 +3,19 @@ import fc from 'fast-check';
 import { gratingLobeOnsetScanDeg, maxGratingFreeSpacingWavelengths, latticeCellAreaPerSpacingSquared } from '../../calc/gratingLobeLimit';
 import { elementCountEstimate } from '../../calc/elementCount';
 
-// Source for the limits: Mailloux, Phased Array Antenna Handbook, 2nd ed. (2005), §2.1:
+// Source for the limits: Mailloux, Phased Array Antenna Handbook, 2nd ed. (2005), §2.1 (section number from memory):
 // rectangular grid d/λ ≤ 1/(1 + sin θmax); equilateral triangular grid (nearest-neighbour d)
 // d/λ ≤ (2/√3)/(1 + sin θmax) in the worst scan plane.
 describe('maxGratingFreeSpacingWavelengths(scanMaxDeg, lattice)', () => {
-  it('rectangular: λ at broadside, λ/2 for scan to 90°, 2/3 λ at 30° (Mailloux §2.1)', () => {
+  it('rectangular: λ at broadside, λ/2 for scan to 90°, 2/3 λ at 30° (Mailloux §2.1 (section number from memory))', () => {
     expect(maxGratingFreeSpacingWavelengths(0, 'rectangular')).toBeCloseTo(1, 12);
     expect(maxGratingFreeSpacingWavelengths(90, 'rectangular')).toBeCloseTo(0.5, 12);
     expect(maxGratingFreeSpacingWavelengths(30, 'rectangular')).toBeCloseTo(2 / 3, 12);
   });
-  it('rectangular at 45°: 1/(1 + 0.7071) = 0.5858 λ (Mailloux §2.1, hand-worked)', () => {
+  it('rectangular at 45°: 1/(1 + 0.7071) = 0.5858 λ (Mailloux §2.1 (section number from memory), hand-worked)', () => {
     expect(maxGratingFreeSpacingWavelengths(45, 'rectangular')).toBeCloseTo(0.585786, 6);
   });
-  it('triangular allows 2/√3 ≈ 1.1547 times the rectangular spacing (Mailloux §2.1)', () => {
+  it('triangular allows 2/√3 ≈ 1.1547 times the rectangular spacing (Mailloux §2.1 (section number from memory))', () => {
     for (const scan of [0, 15, 30, 45, 60, 75, 90]) {
       const ratio = maxGratingFreeSpacingWavelengths(scan, 'triangular') / maxGratingFreeSpacingWavelengths(scan, 'rectangular');
       expect(ratio).toBeCloseTo(2 / Math.sqrt(3), 12);

@@ -17,7 +17,7 @@ import { createScanLossCalculator } from '../../calc/calculators/scanLoss';
 import { teamConventions } from '../../site/conventions';
 
 describe('scan-loss parts', () => {
-  it('projected aperture: −3.01 dB at 60° (cos 60° = ½; Mailloux §2.1)', () => {
+  it('projected aperture: −3.01 dB at 60° (cos 60° = ½; Mailloux §2.1 (section number from memory))', () => {
     expect(projectedApertureLossDb(60)).toBeCloseTo(-3.0103, 4);
     expect(projectedApertureLossDb(0)).toBe(0);
   });
@@ -58,12 +58,12 @@ describe('uniformLineHpbwDeg (root-finding on the closed-form array factor)', ()
       expect(uniformLineHpbwDeg(n, d, s)).toBeCloseTo(engine, 6);
     }
   });
-  it('approaches 0.886 λ/L rad for a long broadside line (uniform line source; Balanis 4th ed. §6.3 / Table 6.2)', () => {
+  it('approaches 0.886 λ/L rad for a long broadside line (uniform line source; Balanis 4th ed. §6.3 (section number from memory) / Table 6.2 (table number from memory))', () => {
     const n = 400;
     const hpbwRad = (uniformLineHpbwDeg(n, 0.5, 0)! * Math.PI) / 180;
     expect(hpbwRad * n * 0.5).toBeCloseTo(0.8859, 3);
   });
-  it('broadens close to 1/cos θ0 for a long line away from end-fire (Mailloux §1.1)', () => {
+  it('broadens close to 1/cos θ0 for a long line away from end-fire (Mailloux §1.1 (section number from memory))', () => {
     const h0 = uniformLineHpbwDeg(200, 0.5, 0)!;
     for (const s of [20, 40, 60]) expect(uniformLineHpbwDeg(200, 0.5, s)! / h0).toBeCloseTo(1 / Math.cos((s * Math.PI) / 180), 2);
   });

@@ -82,7 +82,7 @@ describe('array pattern explorer in Chromium', () => {
       });
     });
     for (const ratio of inside) expect(ratio).toBeLessThanOrEqual(1.0001);
-    // u0 − λ/d = sin 20° − 1/0.95 = −0.711 (Mailloux, Phased Array Antenna Handbook, 2nd ed., §2.1)
+    // u0 − λ/d = sin 20° − 1/0.95 = −0.711 (Mailloux, Phased Array Antenna Handbook, 2nd ed., §2.1 (section number from memory))
     const rows = await page.locator('[data-testid="grating-lobe-row"]').allInnerTexts();
     expect(rows.some((row) => row.includes('−0.711'))).toBe(true);
     await closeClean({ outside, errors, context });

@@ -3,6 +3,8 @@ import type { Browser } from 'playwright-core';
 import { launch, openPage, outputText, siteUrl, waitForCalculator, closeClean } from './browser';
 import { formulaCatalog } from '../../calc/formulaCatalog';
 import { referenceGroups } from '../reference/index';
+import { transcribedGroups } from '../reference/transcribed';
+import { g } from '../../site/lib/guideNumbers';
 import { calculators, docs } from '../../site/nav';
 import { calculatorCautions } from '../../site/lib/cautions';
 import { guideSections } from '../../site/guide';
@@ -38,6 +40,10 @@ describe('generated docs pages (built HTML)', () => {
     expect(page).toContain(`data-total="${total}"`);
     expect(page).toContain(`data-passed="${total}"`);
     expect(page).not.toContain('data-pass="no"');
+    // values transcribed into calc/ are listed apart, not as checks
+    const transcribed = [...page.matchAll(/data-transcribed="([^"]+)"/g)].map((m) => m[1]);
+    expect(transcribed).toEqual(transcribedGroups.flatMap((t) => t.values.map((v) => v.id)));
+    for (const id of transcribed) expect(ids).not.toContain(id);
   });
 
   it('the change log page is rendered from CHANGELOG.md', async () => {
@@ -93,6 +99,11 @@ describe('guide pages', () => {
     expect(page).not.toMatch(/katex(\.min)?\.js/);
     const text = page.replace(/<annotation[\s\S]*?<\/annotation>/g, ''); // KaTeX keeps the TeX source there for screen readers
     expect(text).not.toMatch(/\$\$|\\frac|\\lambda/); // no unrendered TeX left in the page
+    expect(page).toContain(`already ${g.ruzeLambda16Db} dB`); // numbers come from site/lib/guideNumbers.ts
+  });
+
+  it('has no KaTeX error markup on any guide page', async () => {
+    for (const entry of guideSections) expect(await html(entry.path), entry.path).not.toContain('katex-error');
   });
 });
 

@@ -16,7 +16,7 @@ describe('scan-loss estimate in Chromium', () => {
     const { page, outside, errors, context } = await openPage(browser);
     await page.goto(siteUrl('calculators/scan-loss/'));
     await waitForCalculator(page, ID);
-    // projected aperture at 45°: 10·log10(cos 45°) = −1.51 dB (Mailloux §2.1)
+    // projected aperture at 45°: 10·log10(cos 45°) = −1.51 dB (Mailloux §2.1 (section number from memory))
     expect(await outputText(page, 'projectedDb')).toBe('−1.51 dB');
     const pathBefore = await page.locator('[data-plot="gain-change-against-scan-angle"] path[data-series="total"]').getAttribute('d');
 

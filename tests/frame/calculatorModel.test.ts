@@ -62,7 +62,7 @@ describe('evaluate: last good result stays visible, marked stale', () => {
 });
 
 describe('wavelength & spacing results (values checked by hand)', () => {
-  it('10 GHz, 45° scan, triangular: limit (2/√3)/(1 + sin 45°) = 0.6765 λ (Mailloux §2.1); 5 % team margin', () => {
+  it('10 GHz, 45° scan, triangular: limit (2/√3)/(1 + sin 45°) = 0.6765 λ (Mailloux §2.1 (section number from memory)); 5 % team margin', () => {
     const ev = evaluate(def, { ...defaultTexts(def), f: '10 GHz', scan: '45 deg', lat: 'triangular' }, null);
     const v = ev.result!.values;
     expect(v.limitWavelengths).toBeCloseTo(2 / Math.sqrt(3) / (1 + Math.SQRT1_2), 12);

@@ -14,11 +14,13 @@ import offsetFixture from '../fixtures/reflector-feed-offset.json';
 import { displacedFeedBeam } from '../../calc/reflector/feedOffset';
 import { feedPowerPattern } from '../../calc/reflector/feedPattern';
 
-const BALANIS_15_4 = 'Balanis, Antenna Theory, 4th ed., Wiley 2016, §15.4.1 (section number from memory) (figure of aperture efficiency against ψ0 for cos^n feeds; read from the figure)';
-const BALANIS_12_7 = 'Balanis, Antenna Theory, 4th ed., Wiley 2016, §12.7, circular-aperture figures (section and table numbers from memory)';
+const BALANIS_15_4 = 'Balanis, Antenna Theory, 4th ed., Wiley 2016, §15.4.1 (section number from memory; figure of aperture efficiency against ψ0 for cos^n feeds; read from the figure)';
+const BALANIS_12_7 = 'Balanis, Antenna Theory, 4th ed., Wiley 2016, §12.7 (section number from memory), circular-aperture figures';
 const SCIPY = 'SciPy quad, scripts/fixtures/reflector_efficiency.py (tests/fixtures/reflector-efficiency.json)';
 
 const uniform = () => beamFigures(tabulateAperture(() => 1))!;
+/** HPBW (rad) × D/λ of a circular aperture from its half-power point u = (πD/λ) sin(θ/2): 2u/π for a narrow beam. */
+const beamwidthTimesDiameterRad = (halfPowerU: number) => (2 * halfPowerU) / Math.PI;
 const SIDELOBE_SCIPY = 'NumPy/SciPy, scripts/fixtures/reflector_sidelobes.py (tests/fixtures/reflector-sidelobes.json)';
 const OFFSET_NUMPY = 'NumPy/SciPy direct aperture sum, scripts/fixtures/reflector_feed_offset.py (tests/fixtures/reflector-feed-offset.json)';
 const blocked20 = sidelobeFixture.cases.find((c) => c.focalRatio === 0.4 && c.innerFraction === 0.2)!;
@@ -61,17 +63,19 @@ export const reflectorCases: ReferenceGroup = {
       source: 'Ruze, "Antenna tolerance theory — a review", Proc. IEEE 54(4), 1966 (hand-worked)',
       expected: Math.exp(-((Math.PI / 4) ** 2)),
       tolerance: 1e-12,
-      unit: '',
+      quantity: 'ratio',
+      reads: 'ruzeEfficiency',
       compute: () => ruzeEfficiency(0.03 / 16, 0.03),
     },
     {
       id: 'uniform-hpbw-factor',
-      title: 'Uniform circular aperture: HPBW = 1.029 λ/D radians',
+      title: 'Uniform circular aperture: HPBW (rad) × D/λ = 1.029',
       source: BALANIS_12_7,
       expected: 1.029,
       tolerance: 5e-4,
-      unit: 'rad·D/λ',
-      compute: () => (2 * uniform().halfPowerU) / Math.PI,
+      quantity: 'angleRad',
+      reads: 'beamwidthTimesDiameterRad',
+      compute: () => beamwidthTimesDiameterRad(uniform().halfPowerU),
     },
     {
       id: 'uniform-first-sidelobe',
@@ -79,7 +83,8 @@ export const reflectorCases: ReferenceGroup = {
       source: BALANIS_12_7,
       expected: -17.57,
       tolerance: 0.005,
-      unit: 'dB',
+      quantity: 'dB',
+      reads: 'firstSidelobeDb',
       compute: () => uniform().firstSidelobeDb!,
     },
     {
@@ -88,7 +93,8 @@ export const reflectorCases: ReferenceGroup = {
       source: BALANIS_15_4,
       expected: 0.82,
       tolerance: 0.015,
-      unit: '',
+      quantity: 'ratio',
+      reads: 'aperture',
       compute: () => illuminationEfficiencies(2, rimHalfAngleRad(0.4)).aperture,
     },
     {
@@ -97,7 +103,8 @@ export const reflectorCases: ReferenceGroup = {
       source: BALANIS_15_4,
       expected: -11,
       tolerance: 1,
-      unit: 'dB',
+      quantity: 'dB',
+      reads: 'edgeTaperDb',
       compute: () => optimumIllumination(rimHalfAngleRad(0.5)).edgeTaperDb,
     },
     {
@@ -106,7 +113,8 @@ export const reflectorCases: ReferenceGroup = {
       source: BALANIS_15_4,
       expected: 0.82,
       tolerance: 0.015,
-      unit: '',
+      quantity: 'ratio',
+      reads: 'efficiency',
       compute: () => optimumIllumination(rimHalfAngleRad(0.5)).efficiency,
     },
     {
@@ -115,7 +123,8 @@ export const reflectorCases: ReferenceGroup = {
       source: SCIPY,
       expected: scipyCase.spillover,
       tolerance: 2e-6,
-      unit: '',
+      quantity: 'ratio',
+      reads: 'spillover',
       compute: () => illuminationEfficiencies(scipyCase.powerExponent, rimHalfAngleRad(scipyCase.focalRatio)).spillover,
     },
     {
@@ -124,7 +133,8 @@ export const reflectorCases: ReferenceGroup = {
       source: SCIPY,
       expected: scipyCase.taper,
       tolerance: 2e-6,
-      unit: '',
+      quantity: 'ratio',
+      reads: 'taper',
       compute: () => illuminationEfficiencies(scipyCase.powerExponent, rimHalfAngleRad(scipyCase.focalRatio)).taper,
     },
     {
@@ -133,7 +143,8 @@ export const reflectorCases: ReferenceGroup = {
       source: SCIPY,
       expected: scipyOptimum.efficiency,
       tolerance: 1e-6,
-      unit: '',
+      quantity: 'ratio',
+      reads: 'efficiency',
       compute: () => optimumIllumination(rimHalfAngleRad(scipyOptimum.focalRatio)).efficiency,
     },
     {
@@ -142,7 +153,8 @@ export const reflectorCases: ReferenceGroup = {
       source: 'G = η (πD/λ)², hand-worked: πD/λ = 314.3768, squared × 0.6 = 59 299.6 → 47.7305 dBi (Balanis, Antenna Theory, 4th ed., §15.4 (section number from memory))',
       expected: 47.7305,
       tolerance: 1e-4,
-      unit: 'dBi',
+      quantity: 'dBi',
+      reads: 'apertureGainDbi',
       compute: () => apertureGainDbi(0.6, 3, freeSpaceWavelengthM(10e9)),
     },
     {
@@ -151,7 +163,8 @@ export const reflectorCases: ReferenceGroup = {
       source: SIDELOBE_SCIPY,
       expected: blocked20.firstSidelobeDb,
       tolerance: 1e-6,
-      unit: 'dB',
+      quantity: 'dB',
+      reads: 'firstSidelobeDb',
       compute: () => blockedFigures(0.4, blocked20.powerExponent, 0.2).firstSidelobeDb!,
     },
     {
@@ -160,7 +173,8 @@ export const reflectorCases: ReferenceGroup = {
       source: SIDELOBE_SCIPY,
       expected: laterLobe.highestSidelobeDb,
       tolerance: 1e-6,
-      unit: 'dB',
+      quantity: 'dB',
+      reads: 'highestSidelobeDb',
       compute: () => blockedFigures(0.5, 12, 0.1).highestSidelobeDb!,
     },
     {
@@ -169,16 +183,18 @@ export const reflectorCases: ReferenceGroup = {
       source: OFFSET_NUMPY,
       expected: farOffset.scanLossDb,
       tolerance: 1e-4,
-      unit: 'dB',
+      quantity: 'dB',
+      reads: 'scanLossDb',
       compute: () => displacedFeedBeam(farOffset).scanLossDb,
     },
     {
       id: 'hpbw-70-lambda-over-d',
-      title: 'About −10 dB edge taper: HPBW ≈ 70 λ/D degrees (calculator at its defaults)',
+      title: 'About −10 dB edge taper: HPBW (°) × D/λ ≈ 70 (calculator at its defaults)',
       source: 'rule of thumb: common practice, no source (±10 %)',
       expected: 70,
       tolerance: 7,
-      unit: '°·D/λ',
+      quantity: 'angleDeg',
+      reads: 'hpbwFactorDeg',
       compute: () => computeReflector(atDefaults()).values.hpbwFactorDeg as number,
     },
   ],

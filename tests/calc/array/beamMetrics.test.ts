@@ -8,7 +8,7 @@ import { jinc } from '../../../calc/numeric/besselJ';
 
 const DEG = 180 / Math.PI;
 
-describe('principalPlaneMetrics: uniform line source (textbook constants: Balanis, "Antenna Theory", 4th ed., ch. 12 uniform aperture; Stutzman & Thiele, "Antenna Theory and Design", uniform line source)', () => {
+describe('principalPlaneMetrics: uniform line source (textbook constants: Balanis, "Antenna Theory", 4th ed., ch. 12 (chapter number from memory) uniform aperture; Stutzman & Thiele, "Antenna Theory and Design", uniform line source)', () => {
   // 2,000 elements at λ/8 approximate a continuous line source of length L = N·d = 250 λ.
   const model = buildArrayModel({ geometry: { kind: 'linear', count: 2000, spacingWavelengths: 0.125 } });
   const { theta } = principalPlaneMetrics(model);
@@ -23,7 +23,7 @@ describe('principalPlaneMetrics: uniform line source (textbook constants: Balani
   });
 });
 
-describe('uniform circular aperture (textbook constants: Balanis, "Antenna Theory", 4th ed., ch. 12 circular aperture; Stutzman & Thiele, "Antenna Theory and Design")', () => {
+describe('uniform circular aperture (textbook constants: Balanis, "Antenna Theory", 4th ed., ch. 12 (chapter number from memory) circular aperture; Stutzman & Thiele, "Antenna Theory and Design")', () => {
   it('continuous pattern jinc(πD/λ sin θ): HPBW 1.029 λ/D rad (0.1 %) and first sidelobe −17.57 dB (0.01 dB)', () => {
     const diameter = 40;
     const power = (theta: number) => jinc(Math.PI * diameter * Math.sin(theta)) ** 2;
@@ -43,7 +43,7 @@ describe('uniform circular aperture (textbook constants: Balanis, "Antenna Theor
 });
 
 describe('beam broadening with scan', () => {
-  it('long linear array: HPBW(θ0) = HPBW(0)/cos θ0 within 1 % up to 60° (Mailloux, "Phased Array Antenna Handbook", 2nd ed., ch. 1; also DOMAIN.md)', () => {
+  it('long linear array: HPBW(θ0) = HPBW(0)/cos θ0 within 1 % up to 60° (Mailloux, "Phased Array Antenna Handbook", 2nd ed., ch. 1 (chapter number from memory))', () => {
     const hpbw = (scanDeg: number) => principalPlaneMetrics(buildArrayModel({ geometry: { kind: 'linear', count: 200, spacingWavelengths: 0.5 }, steering: { thetaDeg: scanDeg, phiDeg: 0 } })).theta.hpbwDeg!;
     const broadside = hpbw(0);
     for (const scan of [15, 30, 45, 60]) {
@@ -70,7 +70,7 @@ describe('principalPlaneMetrics edge cases', () => {
   });
 });
 
-/** Uniform N-element line array factor power at u − u0 for spacing d (λ): |sin(Nπd·Δu)/(N sin(πd·Δu))|² (Balanis, "Antenna Theory", 4th ed., §6.3). */
+/** Uniform N-element line array factor power at u − u0 for spacing d (λ): |sin(Nπd·Δu)/(N sin(πd·Δu))|² (Balanis, "Antenna Theory", 4th ed., §6.3 (section number from memory)). */
 function uniformLinePower(count: number, spacing: number, du: number): number {
   const x = Math.PI * spacing * du;
   return Math.abs(Math.sin(x)) < 1e-15 ? 1 : (Math.sin(count * x) / (count * Math.sin(x))) ** 2;
@@ -82,7 +82,7 @@ function uniformLineFirstSidelobeDb(count: number, spacing: number): number {
 }
 
 describe('principalPlaneMetrics: grating lobes are not sidelobes, and the horizon counts', () => {
-  it('an 8-element 1 λ line at broadside: both grating lobes sit exactly at θ = ±90° at 0 dB (array factor periodic in u with period λ/d, Mailloux, "Phased Array Antenna Handbook", 2nd ed., §2.1) and the peak sidelobe is the −12.80 dB first sidelobe (Balanis §6.3 formula), to 1e-9 dB', () => {
+  it('an 8-element 1 λ line at broadside: both grating lobes sit exactly at θ = ±90° at 0 dB (array factor periodic in u with period λ/d, Mailloux, "Phased Array Antenna Handbook", 2nd ed., §2.1 (section number from memory)) and the peak sidelobe is the −12.80 dB first sidelobe (Balanis §6.3 (section number from memory) formula), to 1e-9 dB', () => {
     const model = buildArrayModel({ geometry: { kind: 'linear', count: 8, spacingWavelengths: 1 } });
     const { theta } = principalPlaneMetrics(model);
     expect(theta.gratingLobeDb!).toBeCloseTo(0, 9);
@@ -93,7 +93,7 @@ describe('principalPlaneMetrics: grating lobes are not sidelobes, and the horizo
     const lobes = gratingLobeDirections(model.lattice!.vectorsWavelengths, model.beam);
     expect(lobes.map((l) => l.thetaDeg)).toEqual([90, 90]);
   });
-  it('a lobe centred just outside visible space (8 × 0.98 λ) is a grating lobe where it reaches the horizon: its level there equals the array factor at u = 1, to 1e-9 dB (Balanis §6.3 formula)', () => {
+  it('a lobe centred just outside visible space (8 × 0.98 λ) is a grating lobe where it reaches the horizon: its level there equals the array factor at u = 1, to 1e-9 dB (Balanis §6.3 (section number from memory) formula)', () => {
     const model = buildArrayModel({ geometry: { kind: 'linear', count: 8, spacingWavelengths: 0.98 } });
     const { theta } = principalPlaneMetrics(model);
     expect(gratingLobeDirections(model.lattice!.vectorsWavelengths, model.beam)).toHaveLength(0);
@@ -101,13 +101,13 @@ describe('principalPlaneMetrics: grating lobes are not sidelobes, and the horizo
     expect(Math.abs(theta.gratingLobeOffsetDeg!)).toBe(90);
     expect(theta.peakSidelobeDb!).toBeCloseTo(uniformLineFirstSidelobeDb(8, 0.98), 9);
   });
-  it('a sidelobe that peaks beyond the horizon is measured at θ = ±90° (4 × 0.3 λ: the pattern rises from its first null to u = 1), to 1e-9 dB of the Balanis §6.3 formula', () => {
+  it('a sidelobe that peaks beyond the horizon is measured at θ = ±90° (4 × 0.3 λ: the pattern rises from its first null to u = 1), to 1e-9 dB of the Balanis §6.3 (section number from memory) formula', () => {
     const { theta } = principalPlaneMetrics(buildArrayModel({ geometry: { kind: 'linear', count: 4, spacingWavelengths: 0.3 } }));
     expect(theta.peakSidelobeDb!).toBeCloseTo(10 * Math.log10(uniformLinePower(4, 0.3, 1)), 9); // −14.82 dB
     expect(Math.abs(theta.peakSidelobeOffsetDeg!)).toBe(90);
     expect(theta.gratingLobeDb).toBeUndefined();
   });
-  it('a 0.9 λ line steered to 35°: the grating lobe at asin(sin 35° − 1/0.9) is reported at 0 dB and the peak sidelobe stays near −13 dB (Mailloux §2.1)', () => {
+  it('a 0.9 λ line steered to 35°: the grating lobe at asin(sin 35° − 1/0.9) is reported at 0 dB and the peak sidelobe stays near −13 dB (Mailloux §2.1 (section number from memory))', () => {
     const { theta } = principalPlaneMetrics(buildArrayModel({ geometry: { kind: 'linear', count: 12, spacingWavelengths: 0.9 }, steering: { thetaDeg: 35, phiDeg: 0 } }));
     const lobeDeg = Math.asin(Math.sin(35 / DEG) - 1 / 0.9) * DEG;
     expect(theta.gratingLobeDb!).toBeCloseTo(0, 9);
@@ -135,13 +135,13 @@ describe('principalPlaneMetrics: beam peak offset', () => {
       expect(phi.peakOffsetDeg, spec.geometry.kind).toBe(0);
     }
   });
-  it('is below 1e-9° for steered isotropic arrays, whose array-factor peak is exactly at θ0 (progressive phase, Mailloux §1)', () => {
+  it('is below 1e-9° for steered isotropic arrays, whose array-factor peak is exactly at θ0 (progressive phase, Mailloux §1 (section number from memory))', () => {
     for (const thetaDeg of [10, 30, 55]) {
       const { theta } = principalPlaneMetrics(buildArrayModel({ geometry: { kind: 'planar', lattice: 'rectangular', columns: 12, rows: 10, spacingXWavelengths: 0.5 }, steering: { thetaDeg, phiDeg: 20 } }));
       expect(Math.abs(theta.peakOffsetDeg), `θ0=${thetaDeg}`).toBeLessThan(1e-9);
     }
   });
-  it('with a cos θ element the peak is the root of the analytic pattern derivative: 6 × λ/2 line steered to 40° peaks about 2.46° toward broadside (derivative of |AF|²cos²θ written out from the Balanis §6.3 array factor, root by Brent here), within 1e-8°', () => {
+  it('with a cos θ element the peak is the root of the analytic pattern derivative: 6 × λ/2 line steered to 40° peaks about 2.46° toward broadside (derivative of |AF|²cos²θ written out from the Balanis §6.3 (section number from memory) array factor, root by Brent here), within 1e-8°', () => {
     const count = 6, x0 = Math.sin(40 / DEG);
     const derivative = (theta: number) => {
       const x = Math.PI * 0.5 * (Math.sin(theta) - x0), dx = Math.PI * 0.5 * Math.cos(theta);

@@ -9,7 +9,7 @@ const planar = (columns: number, element: object) =>
   buildArrayModel({ geometry: { kind: 'planar', lattice: 'rectangular', columns, rows: columns, spacingXWavelengths: 0.5 }, element: element as never });
 
 describe('directivity(model) of a large broadside planar array at λ/2 (A = N·(λ/2)²)', () => {
-  // 4πA/λ² for a uniformly illuminated aperture: Balanis, "Antenna Theory", 4th ed., §12.5 (D = 4πA/λ²).
+  // 4πA/λ² for a uniformly illuminated aperture: Balanis, "Antenna Theory", 4th ed., §12.5 (section number from memory; D = 4πA/λ²).
   const count = 24;
   const aperture = 4 * Math.PI * count * count * 0.25;
   it('with a cos θ forward element pattern approaches 4πA/λ² within 0.1 dB', () => {
@@ -21,7 +21,7 @@ describe('directivity(model) of a large broadside planar array at λ/2 (A = N·(
     const d = directivity(planar(count, { kind: 'isotropic', groundPlaneHeightWavelengths: 0.25 }));
     expect(Math.abs(d.directivityDbi - db(aperture))).toBeLessThan(0.1);
   });
-  it('with isotropic elements is about 3 dB lower because of the mirror beam (pitfall noted in DOMAIN.md): 64 × 64 within 0.05 dB of 4πA/λ² − 3.01 dB', () => {
+  it('with isotropic elements is about 3 dB lower because of the mirror beam (the mirror beam behind the array takes half the power: hand-derived): 64 × 64 within 0.05 dB of 4πA/λ² − 3.01 dB', () => {
     const d = directivity(planar(64, { kind: 'isotropic' }));
     expect(d.method).toBe('closedForm');
     expect(Math.abs(d.directivityDbi - (db(4 * Math.PI * 64 * 64 * 0.25) - db(2)))).toBeLessThan(0.05);
@@ -42,7 +42,7 @@ describe('directivity(model) of a large broadside planar array at λ/2 (A = N·(
   });
 });
 
-describe('end-fire directivity of long arrays (Balanis, "Antenna Theory", 4th ed., §6.3 and §6.4)', () => {
+describe('end-fire directivity of long arrays (Balanis, "Antenna Theory", 4th ed., §6.3 and §6.4 (section number from memory))', () => {
   for (const count of [100, 300]) {
     const d = 0.25;
     const lengthWavelengths = count * d;

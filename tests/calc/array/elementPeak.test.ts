@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { ELEMENT_NULL_FLOOR_DB, elementLevelDb, elementPowerPeak } from '../../../calc/array/elementPeak';
 
 describe('elementPowerPeak(element) and elementLevelDb(element, direction)', () => {
-  it('peaks: isotropic 1, cos θ 1 at broadside, half-wave dipole 1 broadside to its axis, cos θ over a ground plane at λ/4: |2 sin(π/2)|² = 4 (image theory, Balanis, "Antenna Theory", 4th ed., §4.7), to 1e-9', () => {
+  it('peaks: isotropic 1, cos θ 1 at broadside, half-wave dipole 1 broadside to its axis, cos θ over a ground plane at λ/4: |2 sin(π/2)|² = 4 (image theory, Balanis, "Antenna Theory", 4th ed., §4.7 (section number from memory)), to 1e-9', () => {
     expect(elementPowerPeak({ kind: 'isotropic' })).toBe(1);
     expect(elementPowerPeak({ kind: 'cosine', exponent: 1.3 })).toBeCloseTo(1, 9);
     expect(elementPowerPeak({ kind: 'halfWaveDipole', axis: 'x' })).toBeCloseTo(1, 9);

@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { buildArrayModel, figuresOfMerit, uniformLinearArrayDirectivity } from '../../../calc/array/index';
 
 describe('figuresOfMerit(model)', () => {
-  it('collects directivity (closed form, to 1e-9 dB), beamwidths and a grating-lobe warning at 0.9 λ scanned 40° (d/λ > 1/(1 + sin θ0), Mailloux §2.1)', () => {
+  it('collects directivity (closed form, to 1e-9 dB), beamwidths and a grating-lobe warning at 0.9 λ scanned 40° (d/λ > 1/(1 + sin θ0), Mailloux §2.1 (section number from memory))', () => {
     const model = buildArrayModel({ geometry: { kind: 'linear', count: 20, spacingWavelengths: 0.9 }, steering: { thetaDeg: 40, phiDeg: 0 } });
     const f = figuresOfMerit(model);
     expect(Math.abs(f.directivity.directivityDbi - 10 * Math.log10(uniformLinearArrayDirectivity(20, 0.9, 40)))).toBeLessThan(1e-9);

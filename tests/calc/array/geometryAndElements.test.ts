@@ -61,14 +61,14 @@ describe('element patterns and image factor', () => {
     expect(elementFieldAt({ kind: 'cosine', exponent: 2 }, 0.6, 0, 0.8)).toBeCloseTo(0.64, 14);
     expect(elementFieldAt({ kind: 'cosine', exponent: 2 }, 0.6, 0, -0.8)).toBe(0);
   });
-  it('half-wave dipole along x: 1 broadside, 0 along its axis, cos(π/2·cos ψ)/sin ψ between (Balanis, "Antenna Theory", 4th ed., eq. 4-84)', () => {
+  it('half-wave dipole along x: 1 broadside, 0 along its axis, cos(π/2·cos ψ)/sin ψ between (Balanis, "Antenna Theory", 4th ed., eq. 4-84 (equation number from memory))', () => {
     const dipole = { kind: 'halfWaveDipole' as const, axis: 'x' as const };
     expect(elementFieldAt(dipole, 0, 0, 1)).toBe(1);
     expect(elementFieldAt(dipole, 1, 0, 0)).toBe(0);
     const psi = Math.PI / 3;
     expect(elementFieldAt(dipole, Math.cos(psi), 0, Math.sin(psi))).toBeCloseTo(Math.cos((Math.PI / 2) * Math.cos(psi)) / Math.sin(psi), 14);
   });
-  it('horizontal image factor 2 sin(kh cos θ): 2 at broadside for h = λ/4, 0 at h = λ/2, 0 below the plane (image theory, Balanis §4.7)', () => {
+  it('horizontal image factor 2 sin(kh cos θ): 2 at broadside for h = λ/4, 0 at h = λ/2, 0 below the plane (image theory, Balanis §4.7 (section number from memory))', () => {
     expect(groundPlaneImageFactor(0.25, 1, 'horizontal')).toBeCloseTo(2, 14);
     expect(Math.abs(groundPlaneImageFactor(0.5, 1, 'horizontal'))).toBeLessThan(1e-14);
     expect(groundPlaneImageFactor(0.25, -0.1, 'horizontal')).toBe(0);
@@ -80,7 +80,7 @@ describe('element patterns and image factor', () => {
   });
 });
 
-describe('taper efficiency |Σa|²/(N Σa²) (Mailloux, "Phased Array Antenna Handbook", 2nd ed., §3.1)', () => {
+describe('taper efficiency |Σa|²/(N Σa²) (Mailloux, "Phased Array Antenna Handbook", 2nd ed., §3.1 (section number from memory))', () => {
   it('is 1 for uniform and below 1 for Taylor and cosine tapers', () => {
     expect(taperEfficiency(lineTaperWeights({ kind: 'uniform' }, 16))).toBeCloseTo(1, 14);
     expect(taperEfficiency(lineTaperWeights({ kind: 'taylor', nbar: 5, sidelobeDb: 35 }, 64))).toBeLessThan(0.95);

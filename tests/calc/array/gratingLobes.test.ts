@@ -6,7 +6,7 @@ import { directionCosines } from '../../../calc/array/steering';
 import { reciprocalRadiusFactor } from '../../../calc/gratingLobeLimit';
 
 describe('gratingLobeDirections(vectorsWavelengths, beam)', () => {
-  it('square lattice d = 0.8 λ scanned 30° in φ = 0: lobe at u0 − λ/d only (analytic û0 + (λ/d)·g, Mailloux, "Phased Array Antenna Handbook", 2nd ed., §2.1), to 1e-12', () => {
+  it('square lattice d = 0.8 λ scanned 30° in φ = 0: lobe at u0 − λ/d only (analytic û0 + (λ/d)·g, Mailloux, "Phased Array Antenna Handbook", 2nd ed., §2.1 (section number from memory)), to 1e-12', () => {
     const lobes = gratingLobeDirections([[0.8, 0], [0, 0.8]], { thetaDeg: 30, phiDeg: 0 });
     expect(lobes.length).toBe(1);
     expect(lobes[0].order).toEqual([-1, 0]);
@@ -19,7 +19,7 @@ describe('gratingLobeDirections(vectorsWavelengths, beam)', () => {
     for (const theta of [0, 45, 89]) expect(gratingLobeDirections([[0.5, 0], [0, 0.5]], { thetaDeg: theta, phiDeg: 17 }).length).toBe(0);
     expect(gratingLobeDirections([[2, 0], [0, 2]], { thetaDeg: 0, phiDeg: 0 }).length).toBeGreaterThan(8);
   });
-  it('triangular lattice: nearest lobe sits reciprocalRadiusFactor/d from û0 (calc/gratingLobeLimit, Mailloux §2.1)', () => {
+  it('triangular lattice: nearest lobe sits reciprocalRadiusFactor/d from û0 (calc/gratingLobeLimit, Mailloux §2.1 (section number from memory))', () => {
     const d = 1.3;
     const vectors: Array<[number, number]> = [[d, 0], [d / 2, (d * Math.sqrt(3)) / 2]];
     const lobes = gratingLobeDirections(vectors, { thetaDeg: 0, phiDeg: 0 });
@@ -57,7 +57,7 @@ describe('distanceToGratingLobe / distanceFromMainBeam (direction cosines)', () 
     expect(distanceToGratingLobe(square, [0.5, 0], [-0.7, 0.1])).toBeCloseTo(Math.hypot(0.05, 0.1), 12);
     expect(distanceFromMainBeam(square, [0.5, 0], [0.4, 0])).toBeCloseTo(0.1, 12);
   });
-  it('lobes exactly on the horizon (u² + v² = 1) are listed: the 1 λ line at broadside has two, a 1 λ square lattice four (Mailloux §2.1)', () => {
+  it('lobes exactly on the horizon (u² + v² = 1) are listed: the 1 λ line at broadside has two, a 1 λ square lattice four (Mailloux §2.1 (section number from memory))', () => {
     expect(gratingLobeDirections([[1, 0]], { thetaDeg: 0, phiDeg: 0 }).map((l) => l.u).sort()).toEqual([-1, 1]);
     expect(gratingLobeDirections([[1, 0], [0, 1]], { thetaDeg: 0, phiDeg: 0 })).toHaveLength(4);
     expect(gratingLobeDirections([[0.98, 0]], { thetaDeg: 0, phiDeg: 0 })).toHaveLength(0);

@@ -7,7 +7,7 @@ import { CalcInputError } from '../../../calc/errors';
 const db = (x: number) => 10 * Math.log10(x);
 
 describe('uniformLinearArrayDirectivity(count, spacingWavelengths, scanDeg)', () => {
-  it('equals the numerical integral over the sphere within 0.01 dB for several N, spacings and scans (closed form: Hansen, "Phased Array Antennas", 2nd ed., ch. 2)', () => {
+  it('equals the numerical integral over the sphere within 0.01 dB for several N, spacings and scans (closed form: Hansen, "Phased Array Antennas", 2nd ed., ch. 2 (chapter number from memory))', () => {
     for (const count of [2, 5, 16, 41]) {
       for (const spacing of [0.25, 0.5, 0.7, 1]) {
         for (const scanDeg of [0, 25, 60]) {
@@ -20,7 +20,7 @@ describe('uniformLinearArrayDirectivity(count, spacingWavelengths, scanDeg)', ()
       }
     }
   });
-  it('is exactly N at λ/2 spacing for any scan (sinc(mπ) = 0 in the closed form; Balanis, "Antenna Theory", 4th ed., §6.3: D0 ≈ 2Nd/λ), to 1e-12', () => {
+  it('is exactly N at λ/2 spacing for any scan (sinc(mπ) = 0 in the closed form; Balanis, "Antenna Theory", 4th ed., §6.3 (section number from memory): D0 ≈ 2Nd/λ), to 1e-12', () => {
     expect(uniformLinearArrayDirectivity(10, 0.5, 0)).toBeCloseTo(10, 12);
     expect(uniformLinearArrayDirectivity(10, 0.5, 47)).toBeCloseTo(10, 12);
     expect(uniformLinearArrayDirectivity(1, 0.5, 0)).toBe(1);

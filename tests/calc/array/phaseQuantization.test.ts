@@ -28,7 +28,7 @@ describe('phase quantization', () => {
     expect(quantizePhaseDeg(350, 2)).toBe(0);
     expect(() => quantizePhaseDeg(10, 0)).toThrow(CalcInputError);
   });
-  it('pointing error and quantization sidelobes shrink as bits increase (deterministic rounding; Mailloux, "Phased Array Antenna Handbook", 2nd ed., §7.1 on quantization lobes)', () => {
+  it('pointing error and quantization sidelobes shrink as bits increase (deterministic rounding; Mailloux, "Phased Array Antenna Handbook", 2nd ed., §7.1 (section number from memory) on quantization lobes)', () => {
     const spec = { geometry: { kind: 'linear' as const, count: 64, spacingWavelengths: 0.5 }, steering: { thetaDeg: 7.3, phiDeg: 0 } };
     const coarse = phaseQuantizationEffect(spec, 2);
     const fine = phaseQuantizationEffect(spec, 8);

@@ -10,7 +10,7 @@ describe('taylorLineSourceSidelobeDb(nbar, sidelobeDb): the level a Taylor line 
       expect(Math.abs(taylorLineSourceSidelobeDb(c.nbar, c.sidelobeDb) - c.achievedDb), `n̄=${c.nbar} SLL=${c.sidelobeDb}`).toBeLessThan(0.01);
     }
   });
-  it('n̄ = 1 is the uniform line source: −13.26 dB whatever the design level (Balanis, "Antenna Theory", 4th ed., ch. 12), within 0.005 dB', () => {
+  it('n̄ = 1 is the uniform line source: −13.26 dB whatever the design level (Balanis, "Antenna Theory", 4th ed., ch. 12 (chapter number from memory)), within 0.005 dB', () => {
     for (const sll of [20, 30, 45]) expect(taylorLineSourceSidelobeDb(1, sll)).toBeCloseTo(-13.26, 2);
   });
   it('n̄ = 2 for 30 dB reaches only about −25.7 dB; n̄ = 5 reaches the design level within 0.5 dB (SciPy fixture above)', () => {

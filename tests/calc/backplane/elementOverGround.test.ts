@@ -14,15 +14,15 @@ describe('dipoleOverPlaneDirectivity against SciPy dblquad (scripts/fixtures/bac
 });
 
 describe('textbook values', () => {
-  it('half-wave dipole alone: 1.641 (2.15 dBi) (Balanis, "Antenna Theory", 4th ed., §4.6)', () => {
+  it('half-wave dipole alone: 1.641 (2.15 dBi) (Balanis, "Antenna Theory", 4th ed., §4.6 (section number from memory))', () => {
     const d = dipoleOverPlaneDirectivity('halfWave', null);
     expect(d).toBeCloseTo(1.6409, 4);
     expect(10 * Math.log10(d)).toBeCloseTo(2.15, 2);
   });
-  it('short dipole alone: 1.5 (Balanis, "Antenna Theory", 4th ed., §4.2)', () => {
+  it('short dipole alone: 1.5 (Balanis, "Antenna Theory", 4th ed., §4.2 (section number from memory))', () => {
     expect(dipoleOverPlaneDirectivity('short', null)).toBeCloseTo(1.5, 12);
   });
-  it('short horizontal dipole over a plane: D0 = 4 sin²(kh)/R(kh) (Balanis, "Antenna Theory", 4th ed., §4.7.2), h < 0.4585 λ', () => {
+  it('short horizontal dipole over a plane: D0 = 4 sin²(kh)/R(kh) (Balanis, "Antenna Theory", 4th ed., §4.7.2 (section number from memory)), h < 0.4585 λ', () => {
     for (const h of [0.02, 0.1, 0.2, 0.25, 0.33, 0.45]) {
       const x = 2 * Math.PI * h, t = 2 * x;
       const r = 2 / 3 - Math.sin(t) / t - Math.cos(t) / t ** 2 + Math.sin(t) / t ** 3;

@@ -32,7 +32,7 @@ describe('quarter-wave rule (common practice, no source)', () => {
   });
 });
 
-describe('image factor |2 sin(k0 h √(εr − sin²θ))| (Balanis, "Antenna Theory", 4th ed., §4.7)', () => {
+describe('image factor |2 sin(k0 h √(εr − sin²θ))| (Balanis, "Antenna Theory", 4th ed., §4.7 (section number from memory))', () => {
   it('εr = 1: equals the array engine\'s groundPlaneImageFactor at every angle', () => {
     const h = 0.013, f = 7.3e9;
     for (let theta = 0; theta <= 90; theta += 7.5) {

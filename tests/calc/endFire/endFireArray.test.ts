@@ -30,7 +30,7 @@ describe('endFireElementCount(L, d): N = ⌊L/d⌋ + 1 (our rule)', () => {
   });
 });
 
-describe('endFirePhaseStepRad (Balanis, "Antenna Theory", 4th ed., §6.3–6.4)', () => {
+describe('endFirePhaseStepRad (Balanis, "Antenna Theory", 4th ed., §6.3–6.4 (section number from memory))', () => {
   it('ordinary: −kd; Hansen–Woodyard: −(kd + 2.92/N)', () => {
     expect(endFirePhaseStepRad('ordinary', 10, 0.25)).toBeCloseTo(-Math.PI / 2, 14);
     expect(endFirePhaseStepRad('hansenWoodyard', 10, 0.25)).toBeCloseTo(-(Math.PI / 2 + 0.292), 14);
@@ -51,7 +51,7 @@ describe('endFireDirectivity against SciPy quadrature (scripts/fixtures/end_fire
 });
 
 describe('end-fire directivity: exact values and long-array approximations', () => {
-  it('ordinary end-fire at d = λ/4 has D = N exactly (every cross term sin(mπ/2)cos(mπ/2)/(mπ/2) vanishes; Balanis 4th ed. §6.3, hand-derived)', () => {
+  it('ordinary end-fire at d = λ/4 has D = N exactly (every cross term sin(mπ/2)cos(mπ/2)/(mπ/2) vanishes; Balanis 4th ed. §6.3 (section number from memory), hand-derived)', () => {
     for (const n of [2, 3, 7, 16, 33, 100]) expect(endFireDirectivity('ordinary', n, 0.25)).toBeCloseTo(n, 9);
   });
   it('closed form agrees with the engine\'s sphere quadrature within 0.005 dB (two independent integrations)', () => {
@@ -60,22 +60,22 @@ describe('end-fire directivity: exact values and long-array approximations', () 
       expect(Math.abs(directivity(model).directivityDbi - directivity(model, { method: 'quadrature' }).directivityDbi)).toBeLessThan(0.005);
     }
   });
-  it('long arrays: ordinary → 4L/λ and Hansen–Woodyard → 1.805 · 4L/λ within 1 %, L = N·d (Balanis, "Antenna Theory", 4th ed., §6.3 and §6.4)', () => {
+  it('long arrays: ordinary → 4L/λ and Hansen–Woodyard → 1.805 · 4L/λ within 1 %, L = N·d (Balanis, "Antenna Theory", 4th ed., §6.3 and §6.4 (section number from memory))', () => {
     const n = 400, d = 0.25;
     expect(Math.abs(endFireDirectivity('ordinary', n, d) / endFireApproxDirectivity('ordinary', n * d) - 1)).toBeLessThan(0.01);
     expect(Math.abs(endFireDirectivity('hansenWoodyard', n, d) / endFireApproxDirectivity('hansenWoodyard', n * d) - 1)).toBeLessThan(0.01);
   });
-  it('Hansen–Woodyard gains about 2.56 dB over ordinary only for long arrays (computed, DOMAIN.md pitfall; Balanis 4th ed. §6.4)', () => {
+  it('Hansen–Woodyard gains about 2.56 dB over ordinary only for long arrays (computed; Balanis 4th ed. §6.4 (section number from memory))', () => {
     const advantage = (n: number) => 10 * Math.log10(endFireDirectivity('hansenWoodyard', n, 0.25) / endFireDirectivity('ordinary', n, 0.25));
     expect(Math.abs(advantage(400) - 2.565)).toBeLessThan(0.02);
     expect(Math.abs(advantage(3) - 2.565)).toBeGreaterThan(0.3);
   });
-  it('HPBW of a long ordinary end-fire array ≈ 2 acos(1 − 1.391λ/(πNd)) within 0.5 % (Balanis, "Antenna Theory", 4th ed., §6.3, Table 6.2, from memory)', () => {
+  it('HPBW of a long ordinary end-fire array ≈ 2 acos(1 − 1.391λ/(πNd)) within 0.5 % (Balanis, "Antenna Theory", 4th ed., §6.3 (section number from memory), Table 6.2 (table number from memory), from memory)', () => {
     const n = 100, d = 0.25;
     const approx = 2 * Math.acos(1 - 1.391 / (Math.PI * n * d)) * (180 / Math.PI);
     expect(Math.abs((endFireHpbwDeg('ordinary', n, d) as number) / approx - 1)).toBeLessThan(0.005);
   });
-  it('end-fire spacing limits: λ/2 ordinary, (N − 1)λ/(4N) Hansen–Woodyard (Balanis 4th ed. §6.3–6.4)', () => {
+  it('end-fire spacing limits: λ/2 ordinary, (N − 1)λ/(4N) Hansen–Woodyard (Balanis 4th ed. §6.3–6.4 (section number from memory))', () => {
     expect(endFireSpacingLimitWavelengths('ordinary', 10)).toBe(0.5);
     expect(endFireSpacingLimitWavelengths('hansenWoodyard', 10)).toBeCloseTo(0.225, 15);
   });

@@ -16,14 +16,14 @@ describe('stacking identical Yagis (common practice, no source)', () => {
   });
 });
 
-describe('beamwidth from directivity (Balanis, "Antenna Theory", 4th ed., §2.7, Kraus\'s approximation)', () => {
+describe('beamwidth from directivity (Balanis, "Antenna Theory", 4th ed., §2.7 (section number from memory), Kraus\'s approximation)', () => {
   it('√(41 253/D) degrees with 41 253 = 4π(180/π)²', () => {
     expect(hpbwFromDirectivityDeg(41252.96124941928 / 400)).toBeCloseTo(20, 9);
     expect(hpbwFromDirectivityDeg(0.5)).toBe(180);
   });
 });
 
-describe('square aperture of side L (Balanis, "Antenna Theory", 4th ed., ch. 12: 4πA/λ²)', () => {
+describe('square aperture of side L (Balanis, "Antenna Theory", 4th ed., ch. 12 (chapter number from memory): 4πA/λ²)', () => {
   it('4π L²/λ² and its inverse', () => {
     expect(squareApertureDirectivity(1)).toBeCloseTo(4 * Math.PI, 14);
     expect(squareApertureSideForDirectivity(squareApertureDirectivity(3.7))).toBeCloseTo(3.7, 12);

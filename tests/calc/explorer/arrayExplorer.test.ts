@@ -62,7 +62,7 @@ describe('computeArrayExplorer(inputs, mode)', () => {
     expect(r.values.hpbwCrossDeg).toBe(planes.phi.hpbwDeg);
     expect(r.values.sidelobeDb).toBe(Math.max(planes.theta.peakSidelobeDb!, planes.phi.peakSidelobeDb!));
   });
-  it('a uniform λ/2 line has directivity N (Balanis, "Antenna Theory", 4th ed., §6.3), to 1e-9 dB', () => {
+  it('a uniform λ/2 line has directivity N (Balanis, "Antenna Theory", 4th ed., §6.3 (section number from memory)), to 1e-9 dB', () => {
     const r = computeArrayExplorer(inputsFor({ geo: 'linear', nx: '16', d: '0.5 λ', th: '30 deg' }));
     expect(r.values.directivityDbi!).toBeCloseTo(10 * Math.log10(uniformLinearArrayDirectivity(16, 0.5, 30)), 9);
     expect(r.values.directivityDbi!).toBeCloseTo(10 * Math.log10(16), 9);
@@ -87,7 +87,7 @@ describe('computeArrayExplorer(inputs, mode)', () => {
     const square = computeArrayExplorer(inputsFor({ geo: 'planar', lat: 'rectangular', nx: '64', ny: '64' }), 'interactive');
     expect(square.data.pending).toEqual([]);
   });
-  it('warns of a grating lobe past the spacing limit: 0.9 λ line steered to 35° (onset asin(1/0.9 − 1) = 6.38°, Mailloux §2.1)', () => {
+  it('warns of a grating lobe past the spacing limit: 0.9 λ line steered to 35° (onset asin(1/0.9 − 1) = 6.38°, Mailloux §2.1 (section number from memory))', () => {
     const r = computeArrayExplorer(inputsFor({ geo: 'linear', nx: '12', d: '0.9 λ', th: '35 deg' }));
     expect(r.values.gratingLobeCount).toBe(1);
     expect(r.values.onsetDeg!).toBeCloseTo((Math.asin(1 / 0.9 - 1) * 180) / Math.PI, 9);

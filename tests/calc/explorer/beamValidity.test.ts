@@ -85,13 +85,13 @@ describe('computeArrayExplorer: grating lobes reported apart from sidelobes', ()
   it('an 8-element 1 λ line at broadside: 2 grating lobes on the horizon at 0 dB as "Highest grating lobe level", the peak sidelobe the −12.80 dB first sidelobe, and the caution names the level (before: sidelobe −12.8 dB, no grating-lobe level)', () => {
     const r = computeArrayExplorer(inputsFor({ geo: 'linear', nx: '8', d: '1 λ', th: '0 deg', el: 'isotropic' }), 'complete');
     expect(r.values.gratingLobeCount).toBe(2);
-    expect(r.values.gratingLobeDb!).toBeCloseTo(0, 9); // array factor periodic in u (Mailloux, "Phased Array Antenna Handbook", 2nd ed., §2.1)
-    expect(r.values.sidelobeDb!).toBeCloseTo(-12.797, 3); // uniform 8-element first sidelobe (Balanis, "Antenna Theory", 4th ed., §6.3)
+    expect(r.values.gratingLobeDb!).toBeCloseTo(0, 9); // array factor periodic in u (Mailloux, "Phased Array Antenna Handbook", 2nd ed., §2.1 (section number from memory))
+    expect(r.values.sidelobeDb!).toBeCloseTo(-12.797, 3); // uniform 8-element first sidelobe (Balanis, "Antenna Theory", 4th ed., §6.3 (section number from memory))
     const w = r.warnings.find((x) => x.code === 'grating-lobe-visible')!;
     expect(w.outputs).toContain('gratingLobeDb');
     expect(w.message).toContain('the highest at 0.0 dB');
   });
-  it('a lobe centred just outside visible space (8 × 0.98 λ) gets its own caution with the level at the horizon, |AF(u = 1)|² = −0.36 dB (Balanis §6.3 formula), to 1e-9 dB', () => {
+  it('a lobe centred just outside visible space (8 × 0.98 λ) gets its own caution with the level at the horizon, |AF(u = 1)|² = −0.36 dB (Balanis §6.3 (section number from memory) formula), to 1e-9 dB', () => {
     const r = computeArrayExplorer(inputsFor({ geo: 'linear', nx: '8', d: '0.98 λ', th: '0 deg', el: 'isotropic' }), 'complete');
     expect(r.values.gratingLobeCount).toBe(0);
     expect(r.values.gratingLobeDb!).toBeCloseTo(10 * Math.log10(power(8, 0.98, 1)), 9);
@@ -99,7 +99,7 @@ describe('computeArrayExplorer: grating lobes reported apart from sidelobes', ()
     expect(w.message).toContain('−0.4 dB');
     expect(w.severity).toBe('caution'); // above the −12.8 dB sidelobes
   });
-  it('an 8-element λ/2 line steered to 50°: the edge of the lobe centred at u = sin 50° − 2 reaches the horizon at |AF(u = −1)|² ≈ −23 dB, below the sidelobes, so only a note (Balanis §6.3 formula, to 1e-9 dB)', () => {
+  it('an 8-element λ/2 line steered to 50°: the edge of the lobe centred at u = sin 50° − 2 reaches the horizon at |AF(u = −1)|² ≈ −23 dB, below the sidelobes, so only a note (Balanis §6.3 (section number from memory) formula, to 1e-9 dB)', () => {
     const r = computeArrayExplorer(inputsFor({ geo: 'linear', nx: '8', d: '0.5 λ', th: '50 deg', ph: '0 deg', el: 'isotropic' }), 'complete');
     const du = -1 - Math.sin((50 * Math.PI) / 180);
     expect(r.values.gratingLobeCount).toBe(0);

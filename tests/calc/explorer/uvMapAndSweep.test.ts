@@ -29,7 +29,7 @@ describe('explorerUvMap(inputs, count)', () => {
   });
   it('marks the grating lobe of a 0.95 λ square lattice steered to 20° at u0 − λ/d, v = 0, near 0 dB on the map', () => {
     const map = explorerUvMap(inputsFor({ geo: 'planar', lat: 'rectangular', nx: '12', ny: '12', d: '0.95 λ', th: '20 deg', ph: '0 deg' }), 128);
-    // û0 + (±λ/d, 0): only u0 − 1/0.95 = −0.710 fits in visible space with v = 0 (Mailloux §2.1)
+    // û0 + (±λ/d, 0): only u0 − 1/0.95 = −0.710 fits in visible space with v = 0 (Mailloux §2.1 (section number from memory))
     const lobes = map.gratingLobes;
     expect(lobes.length).toBeGreaterThanOrEqual(1);
     const main = lobes.find((g) => Math.abs(g.v) < 1e-12)!;
@@ -49,7 +49,7 @@ describe('explorerUvMap(inputs, count)', () => {
 });
 
 describe('explorerScanSweep(inputs)', () => {
-  it('a 32-element λ/2 line widens roughly as 1/cos θ0 and most towards end-fire (Mailloux, "Phased Array Antenna Handbook", 2nd ed., ch. 1)', () => {
+  it('a 32-element λ/2 line widens roughly as 1/cos θ0 and most towards end-fire (Mailloux, "Phased Array Antenna Handbook", 2nd ed., ch. 1 (chapter number from memory))', () => {
     const sweep = explorerScanSweep(inputsFor({ geo: 'linear', nx: '32', d: '0.5 λ' }));
     expect(sweep.swept).toBe('theta');
     const at = (deg: number) => sweep.points.find((p) => p.angleDeg === deg)!.hpbwScanDeg!;

@@ -30,7 +30,7 @@ describe('far-field exposure', () => {
   });
 });
 
-describe('aperture (near-field) model, OET-65 §2', () => {
+describe('aperture (near-field) model, OET-65 §2 (section number from memory)', () => {
   const p = 100;
   const d = 1;
   const eta = 0.55;

@@ -25,7 +25,7 @@ describe('Hankel transform of a uniform aperture', () => {
       expect(apertureFieldSlope(uniform, u)).toBeCloseTo((apertureField(uniform, u + h) - apertureField(uniform, u - h)) / (2 * h), 7);
     }
   });
-  it('HPBW = 1.029 λ/D, first null at u = 3.8317, first sidelobe −17.57 dB at u = 5.1356 (uniform circular aperture: Balanis, Antenna Theory, 4th ed., §12.7, table of circular-aperture figures — table number from memory; A&S Table 9.5 for the J1 zero)', () => {
+  it('HPBW = 1.029 λ/D, first null at u = 3.8317, first sidelobe −17.57 dB at u = 5.1356 (uniform circular aperture: Balanis, Antenna Theory, 4th ed., §12.7, table of circular-aperture figures — table number from memory; A&S Table 9.5 (table number from memory) for the J1 zero)', () => {
     const b = beamFigures(uniform)!;
     // HPBW in radians for large D/λ: 2u3/(π D/λ) → 2·u3/π times λ/D
     expect((2 * b.halfPowerU) / Math.PI).toBeCloseTo(1.029, 3);

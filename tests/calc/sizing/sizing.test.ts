@@ -33,7 +33,7 @@ describe('architecture sizing round-trips with each architecture’s own calcula
     const scan = computeScanLoss({ frequencyHz: 10e9, spacingM: c.spacingM!, lattice: 'rectangular', sizeBy: 'width', apertureWidthM: c.sizeM, elementCount: 4, scanMaxDeg: 50, elementModel: 'cosine', cosineExponent: teamConventions.elementPowerExponent, radiationEfficiency: teamConventions.efficiencies.arrayRadiation, targetGainDbi: null });
     expect(scan.values.gainEdgeDbi).toBeCloseTo(33, 9);
   });
-  it('planar array: spacing is the grating-lobe limit at the highest frequency less the team margin (Mailloux §2.1)', () => {
+  it('planar array: spacing is the grating-lobe limit at the highest frequency less the team margin (Mailloux §2.1 (section number from memory))', () => {
     const c = candidate({ f: '9 GHz', fhi: '11 GHz', saz: '45 deg', lat: 'triangular' }, 'planarArray');
     expect(c.spacingM).toBeCloseTo(maxGratingFreeSpacingWavelengths(45, 'triangular') * freeSpaceWavelengthM(11e9) * (1 - teamConventions.spacingMarginFraction), 12);
   });
@@ -42,7 +42,7 @@ describe('architecture sizing round-trips with each architecture’s own calcula
     expect(c.gainEdgeDbi).toBeGreaterThanOrEqual(25);
     expect(c.gainEdgeDbi - 10 * Math.log10(c.elementCount! / (c.elementCount! - 1))).toBeLessThan(25);
   });
-  it('ring: continuous-ring first sidelobe 20·log10|J0(3.8317)| = −7.90 dB (Balanis 4th ed. §6.10)', () => {
+  it('ring: continuous-ring first sidelobe 20·log10|J0(3.8317)| = −7.90 dB (Balanis 4th ed. §6.10 (section number from memory))', () => {
     expect(RING_FIRST_SIDELOBE_DB).toBeCloseTo(-7.9, 1);
   });
   it('ring and Y are sized by the engine when small, and reach the requirement', () => {
