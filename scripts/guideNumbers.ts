@@ -82,12 +82,12 @@ const lambda = freeSpaceWavelengthM(10e9);
 console.log(`  4πA/λ² = ${dB((4 * Math.PI * 1.2 * 0.4) / lambda ** 2)} dBi`);
 calculator('wavelength-spacing', '?v=1&f=9GHz&fhi=10GHz&er=1&scan=50deg&lat=triangular&d=16mm&w=1.2m&h=0.4m&shape=rectangle');
 show('planar 16 × 16 square 0.5 λ isotropic', { geometry: { kind: 'planar', lattice: 'rectangular', columns: 16, rows: 16, spacingXWavelengths: 0.5 } });
-show('planar 16 × 16 square 0.5 λ cos element', { geometry: { kind: 'planar', lattice: 'rectangular', columns: 16, rows: 16, spacingXWavelengths: 0.5 }, element: { kind: 'cosine', exponent: 1 } });
+show('planar 16 × 16 square 0.5 λ cos²θ power-pattern element', { geometry: { kind: 'planar', lattice: 'rectangular', columns: 16, rows: 16, spacingXWavelengths: 0.5 }, element: { kind: 'cosine', powerExponent: 2 } });
 console.log(`  4π(8 λ)²/λ² = ${dB(4 * Math.PI * 64)} dBi`);
 
 console.log('\n## Sparse');
-show('random 64 in 20 λ × 20 λ', { geometry: { kind: 'random', count: 64, extentXWavelengths: 20, extentYWavelengths: 20, minSeparationWavelengths: 1, seed: 7 }, element: { kind: 'cosine', exponent: 1 } });
-show('filled 40 × 40 at 0.5 λ (same 20 λ aperture)', { geometry: { kind: 'planar', lattice: 'rectangular', columns: 40, rows: 40, spacingXWavelengths: 0.5 }, element: { kind: 'cosine', exponent: 1 } });
+show('random 64 in 20 λ × 20 λ', { geometry: { kind: 'random', count: 64, extentXWavelengths: 20, extentYWavelengths: 20, minSeparationWavelengths: 1, seed: 7 }, element: { kind: 'cosine', powerExponent: 2 } });
+show('filled 40 × 40 at 0.5 λ (same 20 λ aperture)', { geometry: { kind: 'planar', lattice: 'rectangular', columns: 40, rows: 40, spacingXWavelengths: 0.5 }, element: { kind: 'cosine', powerExponent: 2 } });
 show('volumetric 4 × 4 × 4 at 0.5 λ', { geometry: { kind: 'volumetric', countX: 4, countY: 4, countZ: 4, spacingWavelengths: 0.5 } });
 show('planar 8 × 8 square 0.5 λ isotropic (same count as the cube)', { geometry: { kind: 'planar', lattice: 'rectangular', columns: 8, rows: 8, spacingXWavelengths: 0.5 } });
 console.log('\n## Distributed: one-way random phase error e^{-(2πε/λ)²}');

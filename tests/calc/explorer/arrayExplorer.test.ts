@@ -29,9 +29,9 @@ describe('explorerArray(inputs): inputs → ArraySpec', () => {
     expect(array.cutPhiDeg).toBe(30);
   });
   it('treats 0 phase bits as continuous and keeps the ground plane in wavelengths', () => {
-    const array = explorerArray(inputsFor({ bits: '0', gp: '0.25 λ', el: 'cosine', q: '1.5' }));
+    const array = explorerArray(inputsFor({ bits: '0', gp: '0.25 λ', el: 'cosine', nexp: '3' }));
     expect(array.spec.phaseBits).toBeUndefined();
-    expect(array.spec.element).toEqual({ kind: 'cosine', exponent: 1.5, groundPlaneHeightWavelengths: expect.closeTo(0.25, 12) });
+    expect(array.spec.element).toEqual({ kind: 'cosine', powerExponent: 3, groundPlaneHeightWavelengths: expect.closeTo(0.25, 12) });
   });
   it('rejects planar grids above 128 × 128 and lines or rings too short, naming the field', () => {
     expect(() => explorerArray(inputsFor({ geo: 'planar', nx: '200', ny: '100' }))).toThrow(/elements: .*128 × 128/);
@@ -47,7 +47,7 @@ describe('explorerArray(inputs): inputs → ArraySpec', () => {
 describe('computeArrayExplorer(inputs, mode)', () => {
   it('steering moves the peak of the plotted cut to θ0 (linear and planar, within one cut sample)', () => {
     for (const [geo, th, ph] of [['linear', 40, 0], ['planar', 25, 30], ['planar', 50, 0]] as const) {
-      const r = computeArrayExplorer(inputsFor({ geo, lat: 'rectangular', nx: '16', ny: '16', th: `${th} deg`, ph: `${ph} deg` }), 'interactive');
+      const r = computeArrayExplorer(inputsFor({ geo, lat: 'rectangular', nx: '16', ny: '16', el: 'isotropic', th: `${th} deg`, ph: `${ph} deg` }), 'interactive');
       const step = r.data.cut!.thetaDeg[1] - r.data.cut!.thetaDeg[0];
       expect(Math.abs(peakThetaDeg(r.data.cut!) - th), `${geo} θ0=${th}`).toBeLessThanOrEqual(step / 2 + 1e-9);
     }
@@ -63,13 +63,13 @@ describe('computeArrayExplorer(inputs, mode)', () => {
     expect(r.values.sidelobeDb).toBe(Math.max(planes.theta.peakSidelobeDb!, planes.phi.peakSidelobeDb!));
   });
   it('a uniform λ/2 line has directivity N (Balanis, "Antenna Theory", 4th ed., §6.3), to 1e-9 dB', () => {
-    const r = computeArrayExplorer(inputsFor({ geo: 'linear', nx: '16', d: '0.5 λ', th: '30 deg' }));
+    const r = computeArrayExplorer(inputsFor({ geo: 'linear', nx: '16', d: '0.5 λ', el: 'isotropic', th: '30 deg' }));
     expect(r.values.directivityDbi!).toBeCloseTo(10 * Math.log10(uniformLinearArrayDirectivity(16, 0.5, 30)), 9);
     expect(r.values.directivityDbi!).toBeCloseTo(10 * Math.log10(16), 9);
     expect(r.values.hpbwCrossDeg).toBeNull(); // a line's beam is a cone: no orthogonal-plane width
   });
-  it('leaves directivity with a non-isotropic element to the background in interactive mode, and computes it in complete mode', () => {
-    const inputs = inputsFor({ geo: 'planar', lat: 'rectangular', nx: '8', ny: '8', el: 'cosine', q: '1' });
+  it('leaves directivity with a non-isotropic element to the background in interactive mode when the quadrature does not fit the budget (16 × 16), and computes it in complete mode', () => {
+    const inputs = inputsFor({ geo: 'planar', lat: 'rectangular', nx: '16', ny: '16', el: 'cosine', nexp: '2' });
     const quick = computeArrayExplorer(inputs, 'interactive');
     expect(quick.data.pending).toEqual(['directivity']);
     expect(quick.values.directivityDbi).toBeNull();
@@ -84,7 +84,7 @@ describe('computeArrayExplorer(inputs, mode)', () => {
     expect(tri.data.pending).toContain('pattern');
     expect(tri.data.cut).toBeNull();
     expect(tri.values.hpbwScanDeg).toBeNull();
-    const square = computeArrayExplorer(inputsFor({ geo: 'planar', lat: 'rectangular', nx: '64', ny: '64' }), 'interactive');
+    const square = computeArrayExplorer(inputsFor({ geo: 'planar', lat: 'rectangular', nx: '64', ny: '64', el: 'isotropic' }), 'interactive');
     expect(square.data.pending).toEqual([]);
   });
   it('warns of a grating lobe past the spacing limit: 0.9 λ line steered to 35° (onset asin(1/0.9 − 1) = 6.38°, Mailloux §2.1)', () => {
@@ -106,11 +106,11 @@ describe('computeArrayExplorer(inputs, mode)', () => {
     }
   });
   it('uses the background lookup when it holds a result for exactly these inputs', () => {
-    const inputs = inputsFor({ el: 'cosine' });
+    const inputs = inputsFor({ el: 'cosine', nx: '16', ny: '16' });
     const complete = computeArrayExplorer(inputs, 'complete');
     const defWith = createArrayExplorerCalculator(teamConventions, { background: (i) => (complete.data.key === inputsKey(i) ? complete : undefined) });
     expect(defWith.compute(inputs)).toBe(complete);
-    expect(defWith.compute(inputsFor({ el: 'cosine', th: '10 deg' })).data.pending).toEqual(['directivity']);
+    expect(defWith.compute(inputsFor({ el: 'cosine', nx: '16', ny: '16', th: '10 deg' })).data.pending).toEqual(['directivity']);
   });
 });
 
