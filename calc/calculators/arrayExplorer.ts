@@ -95,9 +95,7 @@ export function computeArrayExplorer(inputs: CalcInputs, mode: ExplorerMode = 'c
   const doPattern = mode === 'complete' || patternWork(model) <= SYNC_BUDGET_EVALUATIONS;
   const quadrature = directivityNeedsQuadrature(model);
   const quadratureTooCostly = quadrature && quadratureWork(model) > MAX_QUADRATURE_WORK;
-  // A small quadrature (the default 8 × 8 panel with the team's element: ≈ 2·10⁶ evaluations, tens of ms) fits the synchronous budget beside the pattern.
-  const quadratureFits = patternWork(model) + quadratureWork(model) <= SYNC_BUDGET_EVALUATIONS;
-  const doDirectivity = !quadratureTooCostly && (mode === 'complete' || !quadrature || quadratureFits);
+  const doDirectivity = !quadratureTooCostly && (mode === 'complete' || !quadrature);
 
   let cut: ExplorerCut | null = null;
   let theta: PlaneMetrics | null = null;
