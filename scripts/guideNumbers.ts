@@ -44,8 +44,8 @@ calculator('scan-loss', '?v=1&f=10GHz&d=0.6lambda&lat=triangular&by=width&w=0.4m
 calculator('end-fire-length', '?v=1&f=433MHz&type=ordinary&solve=gain&len=2.75lambda&d=0.25lambda');
 calculator('end-fire-length', '?v=1&f=433MHz&type=hansenWoodyard&solve=gain&len=2.75lambda&d=0.25lambda');
 calculator('backplane-spacing', '?v=1&f=5.8GHz&flo=4.9GHz&fhi=6.7GHz&er=1&scan=30deg&el=halfWave&h=12.9mm');
-calculator('array-explorer', '?v=1&geo=yArms&nx=8&d=0.7lambda&f=1.42GHz&tap=uniform&el=isotropic&th=0deg&ph=0deg');
-calculator('array-explorer', '?v=1&geo=thinned&lat=rectangular&out=rectangle&nx=24&ny=24&d=0.5lambda&f=10GHz&fill=0.25&seed=7&tap=uniform&el=cosine&q=1&th=0deg&ph=0deg');
+calculator('array-explorer', '?v=2&geo=yArms&nx=8&d=0.7lambda&f=1.42GHz&tap=uniform&el=isotropic&th=0deg&ph=0deg');
+calculator('array-explorer', '?v=2&geo=thinned&lat=rectangular&out=rectangle&nx=24&ny=24&d=0.5lambda&f=10GHz&fill=0.25&seed=7&tap=uniform&el=cosine&nexp=2&th=0deg&ph=0deg');
 calculator('architecture-sizing', '?v=1&f=9GHz&fhi=10GHz&req=gain&g=32dBi&saz=50deg&sel=0deg&uaz=no&maxsize=1.3m&eta=0.6&etar=0.8&nexp=1.3&margin=0.05&lat=triangular&ge=6dBi');
 
 console.log('\n## End-fire (12 elements, 0.25 λ)');
