@@ -196,6 +196,27 @@ describe('array pattern explorer in Chromium', () => {
     await closeClean({ outside, errors, context });
   });
 
+  it('opens with the team element (power pattern cosⁿθ, n = 1.3), and a version-1 link keeps its antenna', async () => {
+    const { page, outside, errors, context } = await openPage(browser);
+    await page.goto(siteUrl(PAGE));
+    await waitForCalculator(page, ID);
+    expect(await page.locator(`#${ID}-el`).inputValue()).toBe('cosine');
+    expect(await page.locator(`#${ID}-nexp`).inputValue()).toBe('1.3');
+    await expect.poll(() => page.locator('.explorer').getAttribute('data-pending'), { timeout: 60_000 }).toBe('');
+    // 8 × 8 triangular at 0.5 λ: 4πA/λ² = 22.41 dBi; the directivity lies within the edge allowance above it
+    await expect.poll(() => outputText(page, 'directivityDbi')).toMatch(/^22\.[4-9]\d* dBi$/);
+    expect(await outputText(page, 'filledApertureDirectivityDbi')).toMatch(/^22\.41 dBi$/);
+    await page.goto(siteUrl(`${PAGE}?v=1&geo=planar&lat=rectangular&nx=8&ny=8&el=cosine&q=1.5`));
+    await waitForCalculator(page, ID);
+    expect(await page.locator('[data-testid="link-notices"]').innerText()).toMatch(/upgraded to version 2/);
+    expect(await page.locator(`#${ID}-nexp`).inputValue()).toBe('3');
+    await page.goto(siteUrl(`${PAGE}?v=1&geo=planar&lat=rectangular&nx=8&ny=8`));
+    await waitForCalculator(page, ID);
+    expect(await page.locator(`#${ID}-el`).inputValue()).toBe('isotropic');
+    expect(await page.locator('[data-code="isotropic-mirror-beam"]').count()).toBe(1);
+    await closeClean({ outside, errors, context });
+  });
+
   it('downloads the element CSV with one row per element', async () => {
     const { page, errors, context } = await openPage(browser);
     await page.goto(siteUrl(`${PAGE}?v=1&geo=linear&nx=10&th=30deg&bits=3`));
