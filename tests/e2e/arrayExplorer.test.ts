@@ -37,7 +37,10 @@ describe('array pattern explorer in Chromium', () => {
   it('is rendered on the server with default results, the cut and the formulas', async () => {
     const html = await (await fetch(siteUrl(PAGE))).text();
     expect(html).toMatch(/data-output="elementCount"[\s\S]*?64/);
-    expect(html).toMatch(/data-output="directivityDbi"[\s\S]*?dBi/);
+    // The default element is the team's cosⁿθ element, whose directivity needs quadrature: the server
+    // page lists it as computed in the background (the next tests see it arrive) and shows 4πA/λ².
+    expect(html).toMatch(/data-output="filledApertureDirectivityDbi"[\s\S]*?dBi/);
+    expect(html).toContain('data-code="computing-in-background"');
     expect(html).toContain('data-plot="pattern-cut"');
     expect(html).toContain('data-plot="pattern-cut-polar"');
     expect(html).toContain('class="katex"');
