@@ -3,12 +3,12 @@ import { beamBroadeningFactor, currentSheetMismatchLossDb, scanLossPartsDb } fro
 
 export const cosineScanLossFormula = defineFormula({
   id: 'scan-loss-cosine-element',
-  title: 'Scan loss with a cosⁿ element pattern',
+  title: 'Scan loss with an embedded element power pattern cosⁿθ',
   latex: '\\Delta G(\\theta_0) = 10\\log_{10}\\cos\\theta_0 + 10\\,(n-1)\\log_{10}\\cos\\theta_0 = 10\\,n\\log_{10}\\cos\\theta_0',
   symbols: [
-    { symbol: '\\Delta G(\\theta_0)', meaning: 'gain change at scan angle θ0 relative to broadside', unit: 'dB' },
+    { symbol: '\\Delta G(\\theta_0)', meaning: 'realized-gain change at scan angle θ0 relative to broadside: projected aperture (directivity) plus the element factor beyond it', unit: 'dB' },
     { symbol: '\\theta_0', meaning: 'scan angle from broadside', unit: '°' },
-    { symbol: 'n', meaning: 'exponent of the embedded element power pattern cosⁿθ (n = 1: projected aperture only)', unit: '' },
+    { symbol: 'n', meaning: 'exponent of the embedded element power pattern cosⁿθ (power, not field; n = 1: projected aperture only; n ≥ 1 for a large array)', unit: '' },
   ],
   validity: 'Large arrays (every element sees the same surroundings), no grating lobe in visible space; the cosⁿ law is a fit to measured or simulated embedded patterns, not a derivation.',
   source: 'Mailloux, Phased Array Antenna Handbook, 2nd ed., §2.1 (section number from memory; projected aperture and element pattern); exponent fits are common practice.',

@@ -47,8 +47,11 @@ export interface SeparableWeights {
 /** Element pattern kinds; every kind may sit over an infinite ground plane. */
 export type ElementKind =
   | { kind: 'isotropic' }
-  /** Field pattern cos^n θ in the forward hemisphere (θ ≤ 90°), zero behind. */
-  | { kind: 'cosine'; exponent: number }
+  /**
+   * Power pattern cosⁿθ (n = powerExponent; field cos^(n/2) θ) in the forward hemisphere
+   * (θ < 90°), zero behind. The exponent is of the power pattern, as everywhere in Dirigo.
+   */
+  | { kind: 'cosine'; powerExponent: number }
   /** Thin half-wave dipole with its axis along x, y or z. */
   | { kind: 'halfWaveDipole'; axis: 'x' | 'y' | 'z' };
 

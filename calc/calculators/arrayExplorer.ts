@@ -11,13 +11,16 @@
 import type { CalcInputs, CalcResult, CalculatorDef } from '../calculator';
 import type { TeamConventions } from '../teamConventions';
 import { warning, type CalcWarning } from '../warnings';
-import { gratingLobeOnsetScanDeg } from '../gratingLobeLimit';
+import { gratingLobeOnsetScanDeg, latticeCellAreaPerSpacingSquared } from '../gratingLobeLimit';
+import { apertureDirectivity } from '../scanLoss';
+import { degToRad } from '../angle';
 import { gratingLobeOnsetFormula, wavelengthFormula } from '../wavelengthFormulas';
 import {
   arrayDiameterWavelengths,
   buildArrayModel,
   directivity,
   gratingLobeDirections,
+  isIsotropic,
   patternCut,
   principalPlaneMetrics,
   taperEfficiency,
@@ -26,6 +29,7 @@ import {
   type PlaneMetrics,
 } from '../array/index';
 import { explorerArray, inputsKey, type ExplorerGeometry } from '../explorer/explorerInputs';
+import { explorerQueryV1toV2 } from '../explorer/explorerLinkMigration';
 import { cutSamples, directivityNeedsQuadrature, MAX_QUADRATURE_WORK, patternWork, quadratureWork, SYNC_BUDGET_EVALUATIONS } from '../explorer/workEstimate';
 import { elementNullWarning, peakOffSteeringWarning, withoutBeamFigures } from '../explorer/beamValidity';
 import { highestGratingLobeDb, levelText, planePeakPower } from '../explorer/gratingLobeLevel';
@@ -59,6 +63,23 @@ export interface ArrayExplorerData {
 export type ExplorerMode = 'interactive' | 'complete';
 
 const lineLike = (geometry: ExplorerGeometry) => geometry === 'linear';
+
+/** True for an x–y array of isotropic elements without a ground plane (its pattern is mirrored in z = 0). */
+function isMirrorImaged(geometry: ExplorerGeometry, model: ArrayModel): boolean {
+  return geometry !== 'linear' && isIsotropic(model.element);
+}
+
+/**
+ * Directivity of the filled aperture the planar lattice occupies, projected toward the beam,
+ * dBi: 4πA·cos θ₀/λ² with A = elements × lattice cell (Balanis, "Antenna Theory", 4th ed., §12.5 (section number from memory),
+ * and the projected-aperture scan law, Mailloux, "Phased Array Antenna Handbook", 2nd ed., §2.1 (section number from memory));
+ * null for the other geometries, which fill no aperture.
+ */
+function filledApertureDirectivityDbi(geometry: ExplorerGeometry, count: number, spacingWavelengths: number, lattice: 'rectangular' | 'triangular', thetaDeg: number): number | null {
+  if (geometry !== 'planar' || thetaDeg >= 89.9) return null;
+  const areaWavelengths2 = count * latticeCellAreaPerSpacingSquared(lattice) * spacingWavelengths * spacingWavelengths;
+  return 10 * Math.log10(apertureDirectivity(areaWavelengths2, 1) * Math.cos(degToRad(thetaDeg)));
+}
 
 function worstSidelobe(planes: PlaneMetrics[]): number | null {
   const levels = planes.map((p) => p.peakSidelobeDb).filter((x): x is number => x !== undefined && Number.isFinite(x));
@@ -131,6 +152,9 @@ export function computeArrayExplorer(inputs: CalcInputs, mode: ExplorerMode = 'c
   if (array.spacingWavelengths < 0.25 && array.geometry !== 'circular') {
     warnings.push(warning('close-spacing', 'note', 'Spacing below λ/4: mutual coupling is strong, and the embedded element pattern, not this free-space model, decides the real pattern.', ['spacingWavelengths']));
   }
+  if (isMirrorImaged(array.geometry, model)) {
+    warnings.push(warning('isotropic-mirror-beam', 'note', 'Isotropic elements with no ground plane radiate a mirror beam behind the array, so a filled planar array\'s directivity is about 3 dB below 4πA/λ². Choose the element power pattern cosⁿθ (the team\'s element) or add a ground plane to compare with 4πA/λ².', ['directivityDbi']));
+  }
   if (array.geometry === 'thinned') {
     warnings.push(warning('thinned-seed', 'note', 'The thinned layout is one random draw (fixed by the seed); another seed gives another sidelobe structure with about the same average level.', ['sidelobeDb']));
   }
@@ -146,6 +170,7 @@ export function computeArrayExplorer(inputs: CalcInputs, mode: ExplorerMode = 'c
       ringRadiusM: array.ringRadiusWavelengths === null ? null : array.ringRadiusWavelengths * array.wavelengthM,
       sizeWavelengths: arrayDiameterWavelengths(model.positionsWavelengths),
       directivityDbi,
+      filledApertureDirectivityDbi: filledApertureDirectivityDbi(array.geometry, count, array.spacingWavelengths, inputs.lattice as 'rectangular' | 'triangular', inputs.thetaDeg as number),
       hpbwScanDeg: theta?.hpbwDeg ?? null,
       hpbwCrossDeg: phi?.hpbwDeg ?? null,
       fnbwScanDeg: theta?.fnbwDeg ?? null,
@@ -193,8 +218,8 @@ export function createArrayExplorerCalculator(conventions: TeamConventions, opti
     title: 'Array pattern explorer',
     purpose:
       'What does this array radiate when steered: its pattern cut and u–v map, directivity, beamwidths, sidelobe level and grating lobes, and the amplitude and phase each element needs?',
-    schemaVersion: 1,
-    migrations: {},
+    schemaVersion: 2,
+    migrations: { 1: explorerQueryV1toV2 },
     params: [
       { kind: 'choice', key: 'geo', name: 'geometry', label: 'Geometry', options: GEOMETRY_OPTIONS, defaultText: 'planar', description: 'Element layout. Linear arrays lie on x; the others lie in the x–y plane (calc/angleConvention).' },
       { kind: 'choice', key: 'lat', name: 'lattice', label: 'Lattice (planar, thinned)', options: [{ value: 'rectangular', label: 'Rectangular (square cell)' }, { value: 'triangular', label: 'Equilateral triangular' }], defaultText: conventions.lattice, description: 'Lattice of the planar and thinned geometries; the triangular one has rows √3/2·d apart, alternate rows shifted by d/2.' },
@@ -209,8 +234,8 @@ export function createArrayExplorerCalculator(conventions: TeamConventions, opti
       { kind: 'decibel', key: 'sll', name: 'sidelobeDb', label: 'Design sidelobe level below the peak (Taylor, Chebyshev)', defaultText: '30 dB', min: 13, max: 80, description: 'A positive number of dB below the main beam, e.g. 30 dB.' },
       { kind: 'count', key: 'nbar', name: 'nbar', label: 'Taylor n̄', defaultText: '5', min: 1, max: 20, description: 'Number of nearly equal sidelobes next to the main beam.' },
       { kind: 'decibel', key: 'edge', name: 'pedestalDb', label: 'Edge level (cosine² on a pedestal)', defaultText: '-10 dB', min: -60, max: 0, description: 'Field amplitude at the aperture edge relative to the centre.' },
-      { kind: 'choice', key: 'el', name: 'element', label: 'Element pattern', options: [{ value: 'isotropic', label: 'Isotropic' }, { value: 'cosine', label: 'cosⁿ θ (field), forward only' }, { value: 'dipoleX', label: 'Half-wave dipole along x' }, { value: 'dipoleY', label: 'Half-wave dipole along y' }], defaultText: 'isotropic', description: 'Pattern of each element, multiplied by the array factor. Non-isotropic patterns need directivity by integration (computed in the background).' },
-      { kind: 'number', key: 'q', name: 'cosineExponent', label: 'Exponent n of cosⁿ θ', defaultText: '1', min: 0, max: 20, description: 'Field-pattern exponent of the cosⁿ θ element (power pattern cos²ⁿ θ).' },
+      { kind: 'choice', key: 'el', name: 'element', label: 'Element pattern', options: [{ value: 'isotropic', label: 'Isotropic (radiates behind the array too)' }, { value: 'cosine', label: 'Element power pattern cosⁿθ, forward only' }, { value: 'dipoleX', label: 'Half-wave dipole along x' }, { value: 'dipoleY', label: 'Half-wave dipole along y' }], defaultText: 'cosine', description: 'Pattern of each element, multiplied by the array factor. The default is the team\'s element from the conventions. Non-isotropic patterns need directivity by integration (in the background for large arrays).' },
+      { kind: 'number', key: 'nexp', name: 'elementPowerExponent', label: 'Element power pattern cosⁿθ, n', defaultText: String(conventions.elementPowerExponent), min: 0, max: 40, usedWhen: { key: 'el', values: ['cosine'] }, description: 'Exponent of the element\'s power pattern (field cos^(n/2) θ); team default from the conventions. n = 2 is a cos θ field pattern.' },
       { kind: 'length', key: 'gp', name: 'groundHeightM', label: 'Ground-plane height below the elements', defaultText: '', min: 0, max: 100, minExclusive: true, optional: true, wavelengthFrom: 'design', description: 'Optional. A perfectly conducting plane this far behind the elements (e.g. 0.25 λ); empty means none.' },
       { kind: 'angle', key: 'th', name: 'thetaDeg', label: 'Steering θ₀ from broadside', defaultText: '0 deg', min: 0, max: 90, description: 'Beam direction from the array normal (+z); for a linear array, the scan angle from broadside.' },
       { kind: 'angle', key: 'ph', name: 'phiDeg', label: 'Steering φ₀ from +x', defaultText: '0 deg', min: -180, max: 360, description: 'Azimuth of the beam in the array plane, from +x.' },
@@ -223,7 +248,8 @@ export function createArrayExplorerCalculator(conventions: TeamConventions, opti
       { key: 'spacingWavelengths', label: 'Element spacing', kind: 'ratio', digits: 4, unit: 'λ₀' },
       { key: 'ringRadiusM', label: 'Ring radius', kind: 'length', digits: 4 },
       { key: 'sizeWavelengths', label: 'Largest element-to-element distance', kind: 'ratio', digits: 4, unit: 'λ₀' },
-      { key: 'directivityDbi', label: 'Directivity toward (θ₀, φ₀)', kind: 'decibel', digits: 4, unit: 'dBi', description: 'Exact closed form for isotropic elements; integration over the sphere otherwise' },
+      { key: 'directivityDbi', label: 'Directivity toward (θ₀, φ₀): array factor × element pattern, no losses', kind: 'decibel', digits: 4, unit: 'dBi', description: 'Directivity (IEEE Std 145) of the total pattern, array factor times the chosen element pattern; no efficiency or mismatch, so not gain. Exact closed form for isotropic elements; integration over the sphere otherwise' },
+      { key: 'filledApertureDirectivityDbi', label: 'Filled-aperture directivity 4πA·cos θ₀/λ² (planar)', kind: 'decibel', digits: 4, unit: 'dBi', description: 'A = elements × lattice cell: what a large uniformly excited planar array with a forward element reaches; the directivity above differs by the taper efficiency, edge effects and, for isotropic elements, the ≈ 3 dB mirror beam' },
       { key: 'hpbwScanDeg', label: 'HPBW, scan plane (φ = φ₀)', kind: 'angle', digits: 4, description: 'Between the −3 dB points found by root-finding' },
       { key: 'hpbwCrossDeg', label: 'HPBW, orthogonal plane', kind: 'angle', digits: 4 },
       { key: 'fnbwScanDeg', label: 'FNBW, scan plane', kind: 'angle', digits: 4 },
@@ -246,7 +272,8 @@ export function createArrayExplorerCalculator(conventions: TeamConventions, opti
     ],
     assumptions: [
       'Free-space array factor times one element pattern: mutual coupling, edge effects and the embedded element pattern are not modelled.',
-      'Directivity follows the IEEE Std 145 definition; with isotropic elements it is the exact pair sum, otherwise Gauss–Legendre integration over the sphere.',
+      'Directivity follows the IEEE Std 145 definition (no losses, no mismatch: it is not gain or realized gain); with isotropic elements it is the exact pair sum, otherwise Gauss–Legendre integration over the sphere.',
+      'The cosine element is named by its power pattern cosⁿθ (n from the team conventions by default), as on the scan-loss page; a field pattern cosᵐθ is n = 2m.',
       'An x–y array of isotropic elements radiates a mirror beam behind it, so its directivity is about 3 dB below 4πA/λ²; a forward element pattern or a ground plane removes it.',
       'Beamwidths and sidelobe levels are measured in the two principal planes through the beam, sidelobes in the forward half space (z ≥ 0).',
       'Phase shifters are ideal: phases are rounded to the nearest of 2ᴮ states, amplitudes are exact.',
@@ -261,11 +288,11 @@ export function createArrayExplorerCalculator(conventions: TeamConventions, opti
       'IEEE Std 145-2013, Standard for Definitions of Terms for Antennas.',
     ],
     examples: [
-      { title: 'Rooftop 28 GHz backhaul panel: 16 × 16 square lattice, Taylor 30 dB, steered 25° towards the next mast', query: '?v=1&geo=planar&lat=rectangular&out=rectangle&nx=16&ny=16&d=0.5lambda&f=28GHz&tap=taylor&sll=30dB&nbar=5&el=cosine&q=1&th=25deg&ph=0deg&bits=5' },
-      { title: 'Harbour-patrol ship ring: 48 elements round the mast at 3.1 GHz, beam 20° off the ring axis', query: '?v=1&geo=circular&nx=48&d=0.55lambda&f=3.1GHz&tap=uniform&el=isotropic&th=20deg&ph=40deg' },
-      { title: 'Low-band listening station: Y of three 12-element arms at 150 MHz', query: '?v=1&geo=yArms&nx=12&d=1.4m&f=150MHz&tap=uniform&el=isotropic&th=30deg&ph=90deg' },
-      { title: 'Too-wide spacing on purpose: a 12-element line at 0.9 λ steered to 35° (grating lobe)', query: '?v=1&geo=linear&nx=12&d=0.9lambda&f=10GHz&tap=uniform&th=35deg&ph=0deg' },
-      { title: 'Half-filled 24 × 24 test panel at 5.8 GHz (seed 11)', query: '?v=1&geo=thinned&lat=rectangular&out=circle&nx=24&ny=24&d=0.5lambda&f=5.8GHz&fill=0.5&seed=11&tap=uniform&th=10deg&ph=45deg' },
+      { title: 'Rooftop 28 GHz backhaul panel: 16 × 16 square lattice, Taylor 30 dB, steered 25° towards the next mast', query: '?v=2&geo=planar&lat=rectangular&out=rectangle&nx=16&ny=16&d=0.5lambda&f=28GHz&tap=taylor&sll=30dB&nbar=5&el=cosine&nexp=2&th=25deg&ph=0deg&bits=5' },
+      { title: 'Harbour-patrol ship ring: 48 elements round the mast at 3.1 GHz, beam 20° off the ring axis', query: '?v=2&geo=circular&nx=48&d=0.55lambda&f=3.1GHz&tap=uniform&el=isotropic&th=20deg&ph=40deg' },
+      { title: 'Low-band listening station: Y of three 12-element arms at 150 MHz', query: '?v=2&geo=yArms&nx=12&d=1.4m&f=150MHz&tap=uniform&el=isotropic&th=30deg&ph=90deg' },
+      { title: 'Too-wide spacing on purpose: a 12-element line at 0.9 λ steered to 35° (grating lobe)', query: '?v=2&geo=linear&nx=12&d=0.9lambda&f=10GHz&tap=uniform&el=isotropic&th=35deg&ph=0deg' },
+      { title: 'Half-filled 24 × 24 test panel at 5.8 GHz (seed 11)', query: '?v=2&geo=thinned&lat=rectangular&out=circle&nx=24&ny=24&d=0.5lambda&f=5.8GHz&fill=0.5&seed=11&tap=uniform&el=isotropic&th=10deg&ph=45deg' },
     ],
     sourcePath: 'calc/calculators/arrayExplorer.ts',
     compute: (inputs) => options.background?.(inputs) ?? computeArrayExplorer(inputs, 'interactive'),

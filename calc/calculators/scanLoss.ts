@@ -95,6 +95,9 @@ export function computeScanLoss(inputs: CalcInputs): CalcResult<ScanLossData> {
   }
   if (scanMax > 60) warnings.push(warning('wide-scan', 'note', 'Beyond about 60° real elements often fall faster than any cosⁿ fit, and the cos θ broadening law loses accuracy; check with measured embedded patterns.', ['totalScanLossDb', 'hpbwEdgeDeg']));
   if (lineCount < 8) warnings.push(warning('small-aperture', 'outside-validity', 'Fewer than 8 elements across: edge elements behave differently from the infinite-array models used here.', ['totalScanLossDb', 'hpbwBroadsideDeg']));
+  if (model === 'cosine' && exponent < 1) {
+    warnings.push(warning('element-exponent-below-one', 'outside-validity', `An element power pattern cosⁿθ with n = ${exponent} < 1 makes the element factor a gain of ${edge.elementDb.toFixed(2)} dB at ${scanMax}°: the scanned gain would exceed the projected-aperture limit 4πA·cos θ₀/λ². The embedded element pattern of a large array cannot beat the projected aperture, so n ≥ 1 (n = 1 is the ideal).`, ['elementDb', 'totalScanLossDb', 'gainEdgeDbi']));
+  }
   if (dWl < 0.25) warnings.push(warning('close-spacing', 'note', 'Spacing below λ/4: strong mutual coupling; the element model matters more than usual.', ['totalScanLossDb']));
 
   return {
@@ -139,8 +142,8 @@ export function createScanLossCalculator(conventions: TeamConventions): Calculat
       { kind: 'length', key: 'w', name: 'apertureWidthM', label: 'Aperture width (square face)', defaultText: '0.5 m', min: 1e-4, max: 1000, wavelengthFrom: 'design', description: 'Side of the square array face; used when the aperture is given by width.' },
       { kind: 'count', key: 'n', name: 'elementCount', label: 'Element count', defaultText: '256', min: 4, max: 10_000_000, description: 'Number of elements; used when the aperture is given by count.' },
       { kind: 'angle', key: 'scan', name: 'scanMaxDeg', label: 'Maximum scan angle from broadside', defaultText: `${conventions.maxScanDeg} deg`, min: 0, max: 85, description: 'Scan edge, in the worst plane.' },
-      { kind: 'choice', key: 'el', name: 'elementModel', label: 'Element model', options: [ { value: 'cosine', label: 'cosⁿθ embedded element pattern' }, { value: 'currentSheet', label: 'Ideal infinite current sheet (with its scan mismatch)' } ], defaultText: 'cosine', description: 'How the embedded element behaves with scan.' },
-      { kind: 'number', key: 'nexp', name: 'cosineExponent', label: 'Element-pattern exponent n (cosⁿθ)', defaultText: String(conventions.elementPowerExponent), min: 0.5, max: 10, description: 'Team default from the conventions; 1 means the projected-aperture loss alone.' },
+      { kind: 'choice', key: 'el', name: 'elementModel', label: 'Element model', options: [ { value: 'cosine', label: 'Embedded element power pattern cosⁿθ' }, { value: 'currentSheet', label: 'Ideal infinite current sheet (with its scan mismatch)' } ], defaultText: 'cosine', description: 'How the embedded element behaves with scan.' },
+      { kind: 'number', key: 'nexp', name: 'cosineExponent', label: 'Element power pattern cosⁿθ, n', defaultText: String(conventions.elementPowerExponent), min: 0.5, max: 10, usedWhen: { key: 'el', values: ['cosine'] }, description: 'Exponent of the embedded element\'s power pattern (not field); team default from the conventions. 1 means the projected-aperture loss alone; below 1 is physically impossible for a large array and gets a warning.' },
       { kind: 'number', key: 'eta', name: 'radiationEfficiency', label: 'Radiation efficiency', defaultText: String(conventions.efficiencies.arrayRadiation), min: 0.01, max: 1, description: 'Feed network and element losses (team default from the conventions).' },
       { kind: 'decibel', key: 'gt', name: 'targetGainDbi', label: 'Gain target at the scan edge (dBi)', defaultText: '', min: -20, max: 80, optional: true, description: 'Optional: the gain the array must still have at the scan edge.' },
     ],
@@ -148,13 +151,13 @@ export function createScanLossCalculator(conventions: TeamConventions): Calculat
       { key: 'areaM2', label: 'Aperture area', kind: 'number', digits: 4, unit: 'm²' },
       { key: 'elementCount', label: 'Elements', kind: 'count', digits: 0 },
       { key: 'spacingWavelengths', label: 'Spacing', kind: 'ratio', digits: 4, unit: 'λ' },
-      { key: 'directivityBroadsideDbi', label: 'Broadside directivity 4πA/λ²', kind: 'decibel', digits: 4, unit: 'dBi' },
-      { key: 'gainBroadsideDbi', label: 'Broadside gain', kind: 'decibel', digits: 4, unit: 'dBi' },
-      { key: 'projectedDb', label: 'Loss at scan edge: projected aperture cos θ', kind: 'decibel', digits: 4 },
-      { key: 'elementDb', label: 'Loss at scan edge: element factor beyond cos θ', kind: 'decibel', digits: 4 },
-      { key: 'mismatchDb', label: 'Loss at scan edge: mismatch (current sheet)', kind: 'decibel', digits: 4 },
-      { key: 'totalScanLossDb', label: 'Total scan loss at the edge', kind: 'decibel', digits: 4 },
-      { key: 'gainEdgeDbi', label: 'Gain at the scan edge', kind: 'decibel', digits: 4, unit: 'dBi' },
+      { key: 'directivityBroadsideDbi', label: 'Broadside directivity 4πA/λ²', kind: 'decibel', digits: 4, unit: 'dBi', description: 'Directivity (IEEE Std 145) of the filled aperture with a forward element: no losses' },
+      { key: 'gainBroadsideDbi', label: 'Broadside gain η·4πA/λ²', kind: 'decibel', digits: 4, unit: 'dBi', description: 'Gain (IEEE Std 145): directivity times the radiation efficiency; matched at broadside, so realized gain too' },
+      { key: 'projectedDb', label: 'Directivity drop at the scan edge: projected aperture cos θ₀', kind: 'decibel', digits: 4, description: 'The drop of the array\'s directivity itself: 4πA·cos θ₀/λ²' },
+      { key: 'elementDb', label: 'Realized-gain drop at the scan edge: element factor beyond cos θ₀', kind: 'decibel', digits: 4, description: 'cos^(n−1) θ₀ of the embedded element power pattern cosⁿθ: mismatch and coupling folded into n; not a directivity change' },
+      { key: 'mismatchDb', label: 'Realized-gain drop at the scan edge: mismatch (current sheet)', kind: 'decibel', digits: 4, description: '1 − |Γ|² of the ideal current sheet matched at broadside' },
+      { key: 'totalScanLossDb', label: 'Total scan loss at the edge (realized gain)', kind: 'decibel', digits: 4, description: 'Projected aperture (directivity) plus the element factor or the mismatch (realized gain), relative to broadside' },
+      { key: 'gainEdgeDbi', label: 'Realized gain at the scan edge', kind: 'decibel', digits: 4, unit: 'dBi', description: 'Broadside gain plus the total scan loss: efficiency, projected aperture and the element factor or mismatch included' },
       { key: 'hpbwBroadsideDeg', label: 'HPBW at broadside (scan plane)', kind: 'angle', digits: 4 },
       { key: 'hpbwEdgeDeg', label: 'HPBW at the scan edge (scan plane)', kind: 'angle', digits: 4 },
       { key: 'broadeningComputed', label: 'Beam broadening, from the computed pattern', kind: 'ratio', digits: 4, unit: '×' },
@@ -175,7 +178,8 @@ export function createScanLossCalculator(conventions: TeamConventions): Calculat
       'Scan loss is the same in every scan plane; real elements differ between E and H planes.',
       'Beamwidths are computed for a uniformly excited line of elements across the aperture width (root-finding on its array factor), beside the 1/cos θ law.',
       'No grating lobe is assumed in visible space; when one enters, the loss is larger than shown (a warning says so).',
-      'The cosⁿ model folds mismatch and element effects into n; the current-sheet model is an ideal upper bound on performance, not a real element.',
+      'The cosⁿθ model is of the embedded element power pattern (the exponent of the power, not the field, pattern), and folds mismatch and element effects into n; the current-sheet model is an ideal upper bound on performance, not a real element.',
+      'Which quantity each part is: the projected aperture cos θ₀ is the drop of the array\'s directivity (IEEE Std 145); the element factor beyond it and the current-sheet mismatch are drops of realized gain, which the directivity of the array pattern does not show.',
     ],
     references: [
       'R. J. Mailloux, Phased Array Antenna Handbook, 2nd ed., Artech House, 2005, §1.1 and §2.1 (section number from memory).',

@@ -41,7 +41,7 @@ function elementOf(inputs: CalcInputs, wavelengthM: number): ElementPattern {
   const height = inputs.groundHeightM as number | null;
   const ground = height === null ? {} : { groundPlaneHeightWavelengths: height / wavelengthM };
   switch (inputs.element) {
-    case 'cosine': return { kind: 'cosine', exponent: inputs.cosineExponent as number, ...ground };
+    case 'cosine': return { kind: 'cosine', powerExponent: inputs.elementPowerExponent as number, ...ground };
     case 'dipoleX': return { kind: 'halfWaveDipole', axis: 'x', ...ground };
     case 'dipoleY': return { kind: 'halfWaveDipole', axis: 'y', ...ground };
     default: return { kind: 'isotropic', ...ground };

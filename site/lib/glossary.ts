@@ -143,7 +143,7 @@ export const glossary: GlossaryTerm[] = [
   {
     id: 'scan-loss',
     term: 'Scan loss',
-    definition: 'The drop in gain of a phased array as its beam is steered away from broadside: at least the projected-area factor cos θ₀, more with real element patterns and mismatch. Our default model is cosⁿθ₀ with n = 1.3.',
+    definition: 'The drop in gain of a phased array as its beam is steered away from broadside: at least the projected-area factor cos θ₀, more with real element patterns and mismatch. Our default model is the embedded element power pattern cosⁿθ₀ (n is the exponent of the power pattern) with n = 1.3: the cos θ₀ part lowers the directivity, the rest is a drop of realized gain.',
     calculators: ['scan-loss'],
     ieee145: false,
     see: [guide('steering', 'Guide: steering'), { path: 'conventions/', label: 'Conventions' }],

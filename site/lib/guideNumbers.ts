@@ -86,8 +86,8 @@ export const GUIDE_PRESETS = {
   droneScan: '?v=1&f=10GHz&d=0.6lambda&lat=triangular&by=width&w=0.4m&scan=60deg&el=cosine&nexp=1.3&eta=0.8',
   gliderHansenWoodyard: '?v=1&f=433MHz&type=hansenWoodyard&solve=gain&len=2.75lambda&d=0.25lambda',
   campusSector: '?v=1&f=5.8GHz&flo=4.9GHz&fhi=6.7GHz&er=1&scan=30deg&el=halfWave&h=12.9mm',
-  radioY: '?v=1&geo=yArms&nx=8&d=0.7lambda&f=1.42GHz&tap=uniform&el=isotropic&th=0deg&ph=0deg',
-  thinned: '?v=1&geo=thinned&lat=rectangular&out=rectangle&nx=24&ny=24&d=0.5lambda&f=10GHz&fill=0.25&seed=7&tap=uniform&el=cosine&q=1&th=0deg&ph=0deg',
+  radioY: '?v=2&geo=yArms&nx=8&d=0.7lambda&f=1.42GHz&tap=uniform&el=isotropic&th=0deg&ph=0deg',
+  thinned: '?v=2&geo=thinned&lat=rectangular&out=rectangle&nx=24&ny=24&d=0.5lambda&f=10GHz&fill=0.25&seed=7&tap=uniform&el=cosine&nexp=2&th=0deg&ph=0deg',
   harbourSizing: '?v=1&f=9GHz&fhi=10GHz&req=gain&g=32dBi&saz=50deg&sel=0deg&uaz=no&maxsize=1.3m&eta=0.6&etar=0.8&nexp=1.3&margin=0.05&lat=triangular&ge=6dBi',
   balloonSpacing: '?v=1&f=1.68GHz&er=1&scan=30deg&lat=rectangular&d=0.6lambda&w=1m&shape=ellipse',
 } as const;
@@ -134,10 +134,10 @@ const discHpbwDeg = (diameterWavelengths: number) => ((2 * need(beamFigures(tabu
 
 const planar16 = (element?: ArraySpec['element']): ArraySpec => ({ geometry: { kind: 'planar', lattice: 'rectangular', columns: 16, rows: 16, spacingXWavelengths: 0.5 }, element });
 const planarIso = figures(planar16());
-const planarCos = figures(planar16({ kind: 'cosine', exponent: 1 }));
+const planarCos = figures(planar16({ kind: 'cosine', powerExponent: 2 }));
 
-const random64 = figures({ geometry: { kind: 'random', count: 64, extentXWavelengths: 20, extentYWavelengths: 20, minSeparationWavelengths: 1, seed: 7 }, element: { kind: 'cosine', exponent: 1 } });
-const filled40 = figures({ geometry: { kind: 'planar', lattice: 'rectangular', columns: 40, rows: 40, spacingXWavelengths: 0.5 }, element: { kind: 'cosine', exponent: 1 } });
+const random64 = figures({ geometry: { kind: 'random', count: 64, extentXWavelengths: 20, extentYWavelengths: 20, minSeparationWavelengths: 1, seed: 7 }, element: { kind: 'cosine', powerExponent: 2 } });
+const filled40 = figures({ geometry: { kind: 'planar', lattice: 'rectangular', columns: 40, rows: 40, spacingXWavelengths: 0.5 }, element: { kind: 'cosine', powerExponent: 2 } });
 const cube = figures({ geometry: { kind: 'volumetric', countX: 4, countY: 4, countZ: 4, spacingWavelengths: 0.5 } });
 const flat8 = figures({ geometry: { kind: 'planar', lattice: 'rectangular', columns: 8, rows: 8, spacingXWavelengths: 0.5 } });
 /** Coherent gain kept with random position errors of λ/f RMS: e^{−(2π/f)²} (one-way Ruze form), in dB. */

@@ -14,6 +14,7 @@ import { buildArrayModel, principalPlaneMetrics } from '../../calc/array/index';
 import { computeScanLoss } from '../../calc/calculators/scanLoss';
 import { defaultTexts, validateAll } from '../../components/frame/calculatorModel';
 import { createScanLossCalculator } from '../../calc/calculators/scanLoss';
+import { decodeState } from '../../components/frame/urlState';
 import { teamConventions } from '../../site/conventions';
 
 describe('scan-loss parts', () => {
@@ -83,6 +84,31 @@ describe('scan-loss calculator', () => {
   it('warns when a grating lobe enters inside the scan range', () => {
     const r = computeScanLoss(inputs({ d: '0.8 λ', lat: 'rectangular', scan: '45 deg' }));
     expect(r.warnings.map((w) => w.code)).toContain('grating-lobe-in-scan');
+  });
+  // Bound: the embedded element gain of a large array is at most 4π·(cell area)·cos θ/λ² (P. W. Hannan,
+  // "The element-gain paradox for a phased-array antenna", IEEE Trans. Antennas Propag. AP-12, 1964),
+  // so the realized gain scanned to θ0 is at most 4πA·cos θ0/λ² and the power exponent needs n ≥ 1.
+  it('n below 1 gives an outside-validity warning naming the bound n ≥ 1 and the positive element "loss"; n ≥ 1 gives none', () => {
+    const low = computeScanLoss(inputs({ el: 'cosine', nexp: '0.5', scan: '60 deg' }));
+    expect(low.values.elementDb!).toBeCloseTo(-0.5 * 10 * Math.log10(0.5), 9); // +1.51 dB
+    const w = low.warnings.find((x) => x.code === 'element-exponent-below-one');
+    expect(w?.severity).toBe('outside-validity');
+    expect(w?.message).toMatch(/n ≥ 1/);
+    expect(w?.message).toMatch(/\+?1\.51 dB/);
+    expect(w?.outputs).toContain('elementDb');
+    for (const n of ['1', '1.3']) expect(computeScanLoss(inputs({ el: 'cosine', nexp: n, scan: '60 deg' })).warnings.map((x) => x.code)).not.toContain('element-exponent-below-one');
+    expect(computeScanLoss(inputs({ el: 'currentSheet', nexp: '0.5' })).warnings.map((x) => x.code)).not.toContain('element-exponent-below-one');
+  });
+  it('an old link with n in [0.5, 1) still opens (a warning, not a rejection)', () => {
+    const decoded = decodeState(def, '?v=1&f=10GHz&el=cosine&nexp=0.7&scan=60deg');
+    expect(decoded.notices).toEqual([]);
+    expect(decoded.texts.nexp).toBe('0.7');
+  });
+  it('the exponent is read only with the cosine element model (usedWhen el = cosine)', () => {
+    expect(def.params.find((p) => p.key === 'nexp')!.usedWhen).toEqual({ key: 'el', values: ['cosine'] });
+    const a = computeScanLoss(inputs({ el: 'currentSheet', nexp: '1.3' }));
+    const b = computeScanLoss(inputs({ el: 'currentSheet', nexp: '4' }));
+    expect(b.values).toEqual(a.values);
   });
   it('bigger apertures never give less gain at the edge (property)', () => {
     fc.assert(

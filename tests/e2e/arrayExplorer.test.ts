@@ -37,7 +37,10 @@ describe('array pattern explorer in Chromium', () => {
   it('is rendered on the server with default results, the cut and the formulas', async () => {
     const html = await (await fetch(siteUrl(PAGE))).text();
     expect(html).toMatch(/data-output="elementCount"[\s\S]*?64/);
-    expect(html).toMatch(/data-output="directivityDbi"[\s\S]*?dBi/);
+    // The default element is the team's cosⁿθ element, whose directivity needs quadrature: the server
+    // page lists it as computed in the background (the next tests see it arrive) and shows 4πA/λ².
+    expect(html).toMatch(/data-output="filledApertureDirectivityDbi"[\s\S]*?dBi/);
+    expect(html).toContain('data-code="computing-in-background"');
     expect(html).toContain('data-plot="pattern-cut"');
     expect(html).toContain('data-plot="pattern-cut-polar"');
     expect(html).toContain('class="katex"');
@@ -193,6 +196,27 @@ describe('array pattern explorer in Chromium', () => {
     // measured longest task, typically 60–270 ms on this 2-core machine, is reported above).
     expect(stats.longest).toBeLessThan(1000);
     expect(stats.frames).toBeGreaterThan(5);
+    await closeClean({ outside, errors, context });
+  });
+
+  it('opens with the team element (power pattern cosⁿθ, n = 1.3), and a version-1 link keeps its antenna', async () => {
+    const { page, outside, errors, context } = await openPage(browser);
+    await page.goto(siteUrl(PAGE));
+    await waitForCalculator(page, ID);
+    expect(await page.locator(`#${ID}-el`).inputValue()).toBe('cosine');
+    expect(await page.locator(`#${ID}-nexp`).inputValue()).toBe('1.3');
+    await expect.poll(() => page.locator('.explorer').getAttribute('data-pending'), { timeout: 60_000 }).toBe('');
+    // 8 × 8 triangular at 0.5 λ: 4πA/λ² = 22.41 dBi; the directivity lies within the edge allowance above it
+    await expect.poll(() => outputText(page, 'directivityDbi')).toMatch(/^22\.[4-9]\d* dBi$/);
+    expect(await outputText(page, 'filledApertureDirectivityDbi')).toMatch(/^22\.41 dBi$/);
+    await page.goto(siteUrl(`${PAGE}?v=1&geo=planar&lat=rectangular&nx=8&ny=8&el=cosine&q=1.5`));
+    await waitForCalculator(page, ID);
+    expect(await page.locator('[data-testid="link-notices"]').innerText()).toMatch(/upgraded to version 2/);
+    expect(await page.locator(`#${ID}-nexp`).inputValue()).toBe('3');
+    await page.goto(siteUrl(`${PAGE}?v=1&geo=planar&lat=rectangular&nx=8&ny=8`));
+    await waitForCalculator(page, ID);
+    expect(await page.locator(`#${ID}-el`).inputValue()).toBe('isotropic');
+    expect(await page.locator('[data-code="isotropic-mirror-beam"]').count()).toBe(1);
     await closeClean({ outside, errors, context });
   });
 

@@ -48,4 +48,16 @@ describe('scan-loss estimate in Chromium', () => {
     await expect.poll(() => page.locator(`#${ID}-nexp-msg`).innerText()).toMatch(/Out of range/);
     await closeClean({ outside, errors, context });
   });
+
+  it('an old link with an element exponent below 1 opens, with a warning naming the bound n ≥ 1', async () => {
+    const { page, outside, errors, context } = await openPage(browser);
+    await page.goto(siteUrl(`calculators/scan-loss/?v=1&f=10GHz&el=cosine&nexp=0.7&scan=60deg`));
+    await waitForCalculator(page, ID);
+    expect(await page.locator('[data-testid="link-notices"]').count()).toBe(0);
+    expect(await page.locator(`#${ID}-nexp`).inputValue()).toBe('0.7');
+    const warning = page.locator('[data-code="element-exponent-below-one"]');
+    await expect.poll(() => warning.count()).toBe(1);
+    expect(await warning.innerText()).toMatch(/n ≥ 1/);
+    await closeClean({ outside, errors, context });
+  });
 });

@@ -127,7 +127,7 @@ describe('principalPlaneMetrics: beam peak offset', () => {
       { geometry: { kind: 'linear', count: 16, spacingWavelengths: 0.5 } },
       { geometry: { kind: 'planar', lattice: 'rectangular', columns: 8, rows: 8, spacingXWavelengths: 0.5 } },
       { geometry: { kind: 'planar', lattice: 'triangular', columns: 8, rows: 8, spacingXWavelengths: 0.5 } },
-      { geometry: { kind: 'circular', count: 24, radiusWavelengths: 2 }, element: { kind: 'cosine', exponent: 1 } },
+      { geometry: { kind: 'circular', count: 24, radiusWavelengths: 2 }, element: { kind: 'cosine', powerExponent: 2 } },
     ] as const;
     for (const spec of specs) {
       const { theta, phi } = principalPlaneMetrics(buildArrayModel(spec as never));
@@ -150,12 +150,12 @@ describe('principalPlaneMetrics: beam peak offset', () => {
       return 2 * af * dAf * dx * Math.cos(theta) ** 2 - 2 * af * af * Math.cos(theta) * Math.sin(theta);
     };
     const peakDeg = brentRoot(derivative, 35 / DEG, 39.99 / DEG, 1e-16) * DEG;
-    const { theta } = principalPlaneMetrics(buildArrayModel({ geometry: { kind: 'linear', count, spacingWavelengths: 0.5 }, steering: { thetaDeg: 40, phiDeg: 0 }, element: { kind: 'cosine', exponent: 1 } }));
+    const { theta } = principalPlaneMetrics(buildArrayModel({ geometry: { kind: 'linear', count, spacingWavelengths: 0.5 }, steering: { thetaDeg: 40, phiDeg: 0 }, element: { kind: 'cosine', powerExponent: 2 } }));
     expect(peakDeg - 40).toBeCloseTo(-2.46, 2);
     expect(Math.abs(theta.peakOffsetDeg - (peakDeg - 40))).toBeLessThan(1e-8);
   });
   it('follows the element pattern when it pulls the beam: a 4 × λ/2 line of cos θ elements steered to 50° peaks between broadside and 50°', () => {
-    const { theta } = principalPlaneMetrics(buildArrayModel({ geometry: { kind: 'linear', count: 4, spacingWavelengths: 0.5 }, steering: { thetaDeg: 50, phiDeg: 0 }, element: { kind: 'cosine', exponent: 1 } }));
+    const { theta } = principalPlaneMetrics(buildArrayModel({ geometry: { kind: 'linear', count: 4, spacingWavelengths: 0.5 }, steering: { thetaDeg: 50, phiDeg: 0 }, element: { kind: 'cosine', powerExponent: 2 } }));
     expect(theta.peakOffsetDeg).toBeLessThan(-1);
     expect(theta.peakOffsetDeg).toBeGreaterThan(-50);
   });

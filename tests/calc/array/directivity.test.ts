@@ -12,8 +12,8 @@ describe('directivity(model) of a large broadside planar array at λ/2 (A = N·(
   // 4πA/λ² for a uniformly illuminated aperture: Balanis, "Antenna Theory", 4th ed., §12.5 (section number from memory; D = 4πA/λ²).
   const count = 24;
   const aperture = 4 * Math.PI * count * count * 0.25;
-  it('with a cos θ forward element pattern approaches 4πA/λ² within 0.1 dB', () => {
-    const d = directivity(planar(count, { kind: 'cosine', exponent: 1 }));
+  it('with a forward element of power pattern cos²θ (field cos θ) approaches 4πA/λ² within 0.1 dB', () => {
+    const d = directivity(planar(count, { kind: 'cosine', powerExponent: 2 }));
     expect(d.method).toBe('quadrature');
     expect(Math.abs(d.directivityDbi - db(aperture))).toBeLessThan(0.1);
   });
@@ -38,7 +38,7 @@ describe('directivity(model) of a large broadside planar array at λ/2 (A = N·(
     expect(Math.abs(directivity(model).directivityDbi - directivity(model, { method: 'quadrature' }).directivityDbi)).toBeLessThan(0.01);
   });
   it('refuses the closed form for a non-isotropic element', () => {
-    expect(() => directivity(planar(4, { kind: 'cosine', exponent: 1 }), { method: 'closedForm' })).toThrow(CalcInputError);
+    expect(() => directivity(planar(4, { kind: 'cosine', powerExponent: 2 }), { method: 'closedForm' })).toThrow(CalcInputError);
   });
 });
 

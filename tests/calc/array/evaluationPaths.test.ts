@@ -13,7 +13,7 @@ const maxRelativeDifference = (a: Float64Array, b: Float64Array) => {
 };
 
 const specs: Array<[string, ArraySpec]> = [
-  ['rectangular Taylor steered', { geometry: { kind: 'planar', lattice: 'rectangular', columns: 16, rows: 12, spacingXWavelengths: 0.5, spacingYWavelengths: 0.5 }, taper: { kind: 'taylor', nbar: 4, sidelobeDb: 30 }, steering: { thetaDeg: 25, phiDeg: 40 }, element: { kind: 'cosine', exponent: 1.2 } }],
+  ['rectangular Taylor steered', { geometry: { kind: 'planar', lattice: 'rectangular', columns: 16, rows: 12, spacingXWavelengths: 0.5, spacingYWavelengths: 0.5 }, taper: { kind: 'taylor', nbar: 4, sidelobeDb: 30 }, steering: { thetaDeg: 25, phiDeg: 40 }, element: { kind: 'cosine', powerExponent: 2.4 } }],
   ['linear Chebyshev', { geometry: { kind: 'linear', count: 33, spacingWavelengths: 0.5 }, taper: { kind: 'chebyshev', sidelobeDb: 35 }, steering: { thetaDeg: 40, phiDeg: 0 } }],
   ['triangular circle 3-bit', { geometry: { kind: 'planar', lattice: 'triangular', columns: 14, rows: 14, spacingXWavelengths: 0.5, outline: 'circle' }, steering: { thetaDeg: 20, phiDeg: 10 }, phaseBits: 3 }],
   ['elliptical radial cosine', { geometry: { kind: 'planar', lattice: 'rectangular', columns: 20, rows: 10, spacingXWavelengths: 0.5, outline: 'ellipse' }, taper: { kind: 'cosineOnPedestal', pedestal: 0.3 }, taperForm: 'radial', element: { kind: 'halfWaveDipole', axis: 'y', groundPlaneHeightWavelengths: 0.25 } }],

@@ -57,9 +57,10 @@ describe('geometries (positions in wavelengths)', () => {
 });
 
 describe('element patterns and image factor', () => {
-  it('cos^n is w^n ahead and zero behind', () => {
-    expect(elementFieldAt({ kind: 'cosine', exponent: 2 }, 0.6, 0, 0.8)).toBeCloseTo(0.64, 14);
-    expect(elementFieldAt({ kind: 'cosine', exponent: 2 }, 0.6, 0, -0.8)).toBe(0);
+  it('power pattern cosⁿθ has field w^(n/2) ahead and zero behind', () => {
+    expect(elementFieldAt({ kind: 'cosine', powerExponent: 4 }, 0.6, 0, 0.8)).toBeCloseTo(0.64, 14);
+    expect(elementFieldAt({ kind: 'cosine', powerExponent: 4 }, 0.6, 0, -0.8)).toBe(0);
+    expect(elementFieldAt({ kind: 'cosine', powerExponent: 1.3 }, 0.6, 0, 0.8) ** 2).toBeCloseTo(0.8 ** 1.3, 14);
   });
   it('half-wave dipole along x: 1 broadside, 0 along its axis, cos(π/2·cos ψ)/sin ψ between (Balanis, "Antenna Theory", 4th ed., eq. 4-84 (equation number from memory))', () => {
     const dipole = { kind: 'halfWaveDipole' as const, axis: 'x' as const };

@@ -29,9 +29,9 @@ describe('explorerArray(inputs): inputs → ArraySpec', () => {
     expect(array.cutPhiDeg).toBe(30);
   });
   it('treats 0 phase bits as continuous and keeps the ground plane in wavelengths', () => {
-    const array = explorerArray(inputsFor({ bits: '0', gp: '0.25 λ', el: 'cosine', q: '1.5' }));
+    const array = explorerArray(inputsFor({ bits: '0', gp: '0.25 λ', el: 'cosine', nexp: '3' }));
     expect(array.spec.phaseBits).toBeUndefined();
-    expect(array.spec.element).toEqual({ kind: 'cosine', exponent: 1.5, groundPlaneHeightWavelengths: expect.closeTo(0.25, 12) });
+    expect(array.spec.element).toEqual({ kind: 'cosine', powerExponent: 3, groundPlaneHeightWavelengths: expect.closeTo(0.25, 12) });
   });
   it('rejects planar grids above 128 × 128 and lines or rings too short, naming the field', () => {
     expect(() => explorerArray(inputsFor({ geo: 'planar', nx: '200', ny: '100' }))).toThrow(/elements: .*128 × 128/);
@@ -47,7 +47,7 @@ describe('explorerArray(inputs): inputs → ArraySpec', () => {
 describe('computeArrayExplorer(inputs, mode)', () => {
   it('steering moves the peak of the plotted cut to θ0 (linear and planar, within one cut sample)', () => {
     for (const [geo, th, ph] of [['linear', 40, 0], ['planar', 25, 30], ['planar', 50, 0]] as const) {
-      const r = computeArrayExplorer(inputsFor({ geo, lat: 'rectangular', nx: '16', ny: '16', th: `${th} deg`, ph: `${ph} deg` }), 'interactive');
+      const r = computeArrayExplorer(inputsFor({ geo, lat: 'rectangular', nx: '16', ny: '16', el: 'isotropic', th: `${th} deg`, ph: `${ph} deg` }), 'interactive');
       const step = r.data.cut!.thetaDeg[1] - r.data.cut!.thetaDeg[0];
       expect(Math.abs(peakThetaDeg(r.data.cut!) - th), `${geo} θ0=${th}`).toBeLessThanOrEqual(step / 2 + 1e-9);
     }
@@ -63,13 +63,13 @@ describe('computeArrayExplorer(inputs, mode)', () => {
     expect(r.values.sidelobeDb).toBe(Math.max(planes.theta.peakSidelobeDb!, planes.phi.peakSidelobeDb!));
   });
   it('a uniform λ/2 line has directivity N (Balanis, "Antenna Theory", 4th ed., §6.3 (section number from memory)), to 1e-9 dB', () => {
-    const r = computeArrayExplorer(inputsFor({ geo: 'linear', nx: '16', d: '0.5 λ', th: '30 deg' }));
+    const r = computeArrayExplorer(inputsFor({ geo: 'linear', nx: '16', d: '0.5 λ', el: 'isotropic', th: '30 deg' }));
     expect(r.values.directivityDbi!).toBeCloseTo(10 * Math.log10(uniformLinearArrayDirectivity(16, 0.5, 30)), 9);
     expect(r.values.directivityDbi!).toBeCloseTo(10 * Math.log10(16), 9);
     expect(r.values.hpbwCrossDeg).toBeNull(); // a line's beam is a cone: no orthogonal-plane width
   });
   it('leaves directivity with a non-isotropic element to the background in interactive mode, and computes it in complete mode', () => {
-    const inputs = inputsFor({ geo: 'planar', lat: 'rectangular', nx: '8', ny: '8', el: 'cosine', q: '1' });
+    const inputs = inputsFor({ geo: 'planar', lat: 'rectangular', nx: '8', ny: '8', el: 'cosine', nexp: '2' });
     const quick = computeArrayExplorer(inputs, 'interactive');
     expect(quick.data.pending).toEqual(['directivity']);
     expect(quick.values.directivityDbi).toBeNull();
@@ -84,7 +84,7 @@ describe('computeArrayExplorer(inputs, mode)', () => {
     expect(tri.data.pending).toContain('pattern');
     expect(tri.data.cut).toBeNull();
     expect(tri.values.hpbwScanDeg).toBeNull();
-    const square = computeArrayExplorer(inputsFor({ geo: 'planar', lat: 'rectangular', nx: '64', ny: '64' }), 'interactive');
+    const square = computeArrayExplorer(inputsFor({ geo: 'planar', lat: 'rectangular', nx: '64', ny: '64', el: 'isotropic' }), 'interactive');
     expect(square.data.pending).toEqual([]);
   });
   it('warns of a grating lobe past the spacing limit: 0.9 λ line steered to 35° (onset asin(1/0.9 − 1) = 6.38°, Mailloux §2.1 (section number from memory))', () => {
@@ -120,5 +120,66 @@ describe('computeArrayExplorer: directivity too costly to integrate', () => {
     expect(r.data.pending).not.toContain('directivity');
     expect(r.values.directivityDbi).toBeNull();
     expect(r.warnings.find((w) => w.code === 'directivity-too-costly')?.severity).toBe('caution');
+  });
+});
+
+describe('the default element is the team element, and directivity is compared with 4πA/λ²', () => {
+  const db = (x: number) => 10 * Math.log10(x);
+  it('defaults to the cosine element with the team\'s power exponent (site/conventions.ts)', () => {
+    const array = explorerArray(inputsFor({}));
+    expect(array.spec.element).toEqual({ kind: 'cosine', powerExponent: teamConventions.elementPowerExponent });
+  });
+  // Lower bound, derived: the array factor is periodic on the reciprocal lattice, and by Parseval
+  // its |AF|² integrates over one cell to N / (lattice cell in λ²) for unit weights. At 0.5 λ on the
+  // triangular lattice the visible disk u² + v² ≤ 1 lies inside the central (hexagonal) cell, whose
+  // inscribed radius is 1/(√3·0.5) = 1.155; with dΩ = du dv / cos θ and a power pattern cosⁿθ,
+  // n ≥ 1, ∫|AF|² cosⁿθ dΩ ≤ N / cell, so D(0) ≥ 4π·N·cell/λ² = 4πA/λ². Upper bound: the edge-effect
+  // allowance 10·log10(1 + 0.5 λ/L_min) used in tests/calc/array/properties.test.ts (common practice,
+  // no source), L_min = 8 rows × 0.433 λ = 3.46 λ → 0.59 dB. Computed excess: +0.18 dB.
+  it('the default (8 × 8 filled triangular planar at 0.5 λ, broadside, team element n = 1.3) lies between 4πA/λ² and 4πA/λ² + the edge allowance', () => {
+    const inputs = inputsFor({});
+    expect(computeArrayExplorer(inputs, 'interactive').data.pending).toEqual(['directivity']);
+    const r = computeArrayExplorer(inputs, 'complete');
+    const aperture = db(4 * Math.PI * 64 * (Math.sqrt(3) / 2) * 0.25);
+    expect(r.values.filledApertureDirectivityDbi!).toBeCloseTo(aperture, 12);
+    const excess = r.values.directivityDbi! - aperture;
+    expect(excess).toBeGreaterThan(-1e-3); // quadrature error allowance
+    expect(excess).toBeLessThan(10 * Math.log10(1 + 0.5 / (8 * 0.5 * Math.sqrt(3) / 2)));
+    expect(r.warnings.map((w) => w.code)).not.toContain('isotropic-mirror-beam');
+  });
+  it('the same 8 × 8 on a square lattice at λ/2 (period 2 in u and v holds the disk): within [0, 0.1] dB of 4πA/λ² (computed +0.067 dB)', () => {
+    const r = computeArrayExplorer(inputsFor({ lat: 'rectangular' }), 'complete');
+    const excess = r.values.directivityDbi! - db(4 * Math.PI * 64 * 0.25);
+    expect(excess).toBeGreaterThan(-1e-3);
+    expect(excess).toBeLessThan(0.1);
+  });
+  // Derived: isotropic elements in the plane z = 0 radiate the same at θ and 180° − θ, so for the
+  // same peak the sphere average doubles against a forward element: 10·log10 2 = 3.01 dB, ± the edge
+  // effects of an 8 × 8 (computed 3.22 dB).
+  it('isotropic elements with no ground plane: a note names the ≈ 3 dB mirror-beam gap, and the directivity is 2.5–3.5 dB below 4πA/λ²', () => {
+    const r = computeArrayExplorer(inputsFor({ el: 'isotropic' }), 'interactive');
+    const note = r.warnings.find((w) => w.code === 'isotropic-mirror-beam');
+    expect(note?.message).toMatch(/3 dB below 4πA\/λ²/);
+    expect(note?.outputs).toContain('directivityDbi');
+    const gap = r.values.filledApertureDirectivityDbi! - r.values.directivityDbi!;
+    expect(gap).toBeGreaterThan(2.5);
+    expect(gap).toBeLessThan(3.5);
+    const grounded = computeArrayExplorer(inputsFor({ el: 'isotropic', gp: '0.25 λ' }), 'complete');
+    expect(grounded.warnings.map((w) => w.code)).not.toContain('isotropic-mirror-beam');
+  });
+  it('the filled-aperture reference follows the projected aperture cos θ₀ and the lattice cell, and is absent for lines, rings and thinned arrays', () => {
+    const tri = computeArrayExplorer(inputsFor({ lat: 'triangular', d: '0.6 λ', th: '40 deg' }), 'interactive');
+    expect(tri.values.filledApertureDirectivityDbi!).toBeCloseTo(db(4 * Math.PI * 64 * (Math.sqrt(3) / 2) * 0.36 * Math.cos((40 * Math.PI) / 180)), 12);
+    for (const geo of ['linear', 'circular', 'thinned']) {
+      expect(computeArrayExplorer(inputsFor({ geo, el: 'isotropic' }), 'interactive').values.filledApertureDirectivityDbi, geo).toBeNull();
+    }
+  });
+  it('the exponent is read only for the cosine element (usedWhen el = cosine)', () => {
+    const spec = explorerDef.params.find((p) => p.key === 'nexp')!;
+    expect(spec.usedWhen).toEqual({ key: 'el', values: ['cosine'] });
+    expect(spec.label).toBe('Element power pattern cosⁿθ, n');
+    const a = computeArrayExplorer(inputsFor({ el: 'isotropic', nexp: '1.3' }), 'interactive');
+    const b = computeArrayExplorer(inputsFor({ el: 'isotropic', nexp: '7' }), 'interactive');
+    expect(b.values).toEqual(a.values);
   });
 });

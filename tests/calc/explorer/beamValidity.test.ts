@@ -9,7 +9,7 @@ const codes = (r: { warnings: Array<{ code: string }> }) => r.warnings.map((w) =
 
 describe('elementNullWarning(element, beam): beam figures toward an element null', () => {
   it(`warns (outside-validity, every beam output) when the element is more than ${ELEMENT_NULL_DEPTH_DB} dB below its peak toward θ0, stating the threshold`, () => {
-    const cos = { kind: 'cosine', exponent: 1 } as const;
+    const cos = { kind: 'cosine', powerExponent: 2 } as const;
     const at85 = elementNullWarning(cos, { thetaDeg: 85, phiDeg: 0 })!; // 20 log10 cos 85° = −21.2 dB
     expect(at85.severity).toBe('outside-validity');
     expect(at85.outputs).toEqual([...BEAM_OUTPUT_KEYS]);
