@@ -1,5 +1,8 @@
 /** Requirement-to-architecture sizing: re-exports only. */
 export * from './candidate';
+export * from './coverage';
+export * from './candidateChecks';
+export * from './uniformSidelobe';
 export * from './reflectorCandidate';
 export * from './planarCandidate';
 export * from './lineCandidate';

@@ -81,7 +81,7 @@ describe('bigger requirements never give smaller antennas (property, fast-check)
         for (const ca of a) {
           const cb = b.find((c) => c.id === ca.id)!;
           expect(cb.sizeM, ca.id).toBeGreaterThanOrEqual(ca.sizeM * (1 - 1e-9));
-          for (const v of [cb.sizeM, cb.areaM2, cb.gainEdgeDbi]) expect(Number.isFinite(v)).toBe(true);
+          for (const v of [cb.sizeM, cb.footprintM2, cb.gainEdgeDbi]) expect(Number.isFinite(v)).toBe(true);
         }
       }),
       { numRuns: 25 },
