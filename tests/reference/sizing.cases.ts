@@ -10,6 +10,6 @@ export const sizingCases: ReferenceGroup = {
   cases: [
     { id: 'sizing-dish-40dbi', title: 'Dish for 40 dBi at 10 GHz with η = 0.6: D = (λ/π)√(G/η)', source: 'Gain of a circular aperture G = η(πD/λ)² (Balanis, Antenna Theory, 4th ed., §15.4); hand-worked', expected: (0.0299792458 / Math.PI) * Math.sqrt(1e4 / 0.6), tolerance: 1e-9, unit: 'm', compute: () => diameterForGainM(40, 0.6, freeSpaceWavelengthM(10e9)) },
     { id: 'sizing-ring-sidelobe', title: 'First sidelobe of a continuous uniform ring: 20·log10|J0(3.8317)|', source: 'Balanis, Antenna Theory, 4th ed., §6.10 (ring pattern J0)', expected: -7.90, tolerance: 0.01, unit: 'dB', compute: () => RING_FIRST_SIDELOBE_DB },
-    { id: 'sizing-element-beam', title: 'Beamwidth of a 6 dBi element by G ≈ 32 400/θ²', source: 'Stutzman & Thiele, Antenna Theory and Design, 3rd ed., §2.4 (common practice)', expected: Math.sqrt(32400 / 10 ** 0.6), tolerance: 1e-9, unit: '°', compute: () => elementBeamwidthDeg(6) },
+    { id: 'sizing-element-beam', title: 'Beamwidth of a 6 dBi element by the beam-area relation G ≈ 41 253/θ²', source: 'Kraus, Antennas, 2nd ed., §2-13 (beam area; 41 253 = 4π(180/π)² deg²); hand-worked √(41 252.96/3.981) = 101.8°', expected: 101.795, tolerance: 1e-3, unit: '°', compute: () => elementBeamwidthDeg(6) },
   ],
 };
