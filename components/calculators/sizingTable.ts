@@ -1,6 +1,7 @@
 /** Rows of the architecture-sizing table, formatted for the page and for Markdown (pure, tested). */
 import type { SizingData } from '../../calc/calculators/architectureSizing';
 import type { Candidate } from '../../calc/sizing/candidate';
+import { coverageCornerScanDeg } from '../../calc/sizing/coverage';
 import { formatCount, formatQuantity } from '../frame/format';
 
 export interface SizingRow {
@@ -37,6 +38,15 @@ const minus = (text: string) => text.replace('-', '−');
 /** Gains to 0.1 dB when computed (the efficiencies assumed are not known better), to 0.5 dB from a table. */
 const gain = (dbi: number, precision: Candidate['gainPrecision']) =>
   precision === 'computed' ? `${minus(dbi.toFixed(1))} dBi` : `≈ ${minus((Math.round(dbi * 2) / 2).toFixed(1))} dBi`;
+
+/** What coverage means for every row of the table, stated once above it. */
+export function coverageStatement(data: SizingData): string {
+  const { scanAzimuthDeg: az, scanElevationDeg: el } = data.requirement;
+  const corner = coverageCornerScanDeg(az, el);
+  const angle = (deg: number) => formatQuantity(deg, 'angle', 3).text;
+  if (corner === 0) return 'Coverage for every candidate: a fixed beam at the boresight.';
+  return `Coverage for every candidate: ±${angle(az)}° in azimuth × ±${angle(el)}° in elevation about the boresight. Faces, rings and Y arrays look at the boresight and are judged at the region's corner, ${angle(corner)}° from their normal (acos(cos az · cos el)); the reflector and the Yagi–Uda are turned mechanically and keep their beam.`;
+}
 
 /** The reasons as one sentence, or how it fits. */
 export function candidateStatus(c: Candidate, chosenId: string | null): string {
@@ -84,10 +94,10 @@ const cell = (text: string) => text.replace(/\|/g, '\\|');
 /** The table's column headings, shared by the page and the Markdown. */
 export const SIZING_COLUMNS = ['Architecture', 'Largest dimension', 'Footprint (enclosing circle)', 'Depth', 'Elements', 'Element gain', 'Steering', 'HPBW broadside', 'HPBW at coverage corner', 'Gain broadside', 'Gain at coverage corner', 'First sidelobe'] as const;
 
-/** The whole table as Markdown, for design-review notes, with the recommendation rule under it. */
-export function sizingMarkdown(rows: SizingRow[], rule?: string): string {
+/** The whole table as Markdown, for design-review notes: the coverage above it, the recommendation rule under it. */
+export function sizingMarkdown(rows: SizingRow[], rule?: string, coverage?: string): string {
   const header = [...SIZING_COLUMNS, 'Feasibility'];
-  const lines = [`| ${header.join(' | ')} |`, `| ${header.map(() => '---').join(' | ')} |`];
+  const lines = [...(coverage ? [coverage, ''] : []), `| ${header.join(' | ')} |`, `| ${header.map(() => '---').join(' | ')} |`];
   for (const r of rows) {
     const name = r.chosen ? `**${r.name}** ★` : r.fits ? r.name : `${r.name} ✖`;
     lines.push(`| ${[name, r.size, r.footprint, r.depth, r.elements, r.elementGain, r.steering, r.beamBroadside, r.beamEdge, r.gainBroadside, r.gainEdge, r.sidelobe, r.status].map(cell).join(' | ')} |`);
