@@ -68,7 +68,8 @@ export function sizeLinearArray(requirement: SizingRequirement): Candidate {
     gainPrecision: 'computed',
     hpbwBroadsideDeg: [uniformLineHpbwDeg(count, d / lambda, 0), fan],
     hpbwEdgeDeg: uniformLineHpbwDeg(count, d / lambda, scan),
-    beamPrecision: 'estimate',
+    // The in-plane beam is computed; the fan across the line is the beam-area estimate (the table shows it to two figures).
+    beamPrecision: 'computed',
     firstSidelobeDb: UNIFORM_FIRST_SIDELOBE_DB,
     flags,
     fits: true,

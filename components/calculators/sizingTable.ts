@@ -77,7 +77,11 @@ export function sizingRows(data: SizingData): SizingRow[] {
       elements,
       elementGain: c.elementGainDbi === null ? '—' : `${minus(c.elementGainDbi.toFixed(1))} dBi`,
       steering: c.steering,
-      beamBroadside: a !== null && b !== null && Math.abs(a - b) < 1e-3 * Math.max(a, b) ? `${approx}${angle(a, figures)}` : `${approx}${angle(a, figures)} × ${angle(b, c.id === 'linearArray' ? FIGURES.estimate : figures)}`,
+      beamBroadside: a !== null && b !== null && Math.abs(a - b) < 1e-3 * Math.max(a, b)
+        ? `${approx}${angle(a, figures)}`
+        : c.id === 'linearArray'
+          ? `${angle(a, figures)} × ≈ ${angle(b, FIGURES.estimate)}` // the fan across the line is the beam-area estimate
+          : `${approx}${angle(a, figures)} × ${angle(b, figures)}`,
       beamEdge: `${approx}${angle(c.hpbwEdgeDeg, figures)}`,
       gainBroadside: gain(c.gainBroadsideDbi, c.gainPrecision),
       gainEdge: gain(c.gainEdgeDbi, c.gainPrecision),

@@ -34,6 +34,8 @@ describe('sizing table rows', () => {
     const dish = rows.find((r) => r.id === 'reflector')!;
     expect(dish.gainBroadside).toMatch(/^\d+\.\d dBi$/);
     expect(dish.beamBroadside).toMatch(/^\d\.\d{2}°$/); // e.g. 5.38°
+    const line = rows.find((r) => r.id === 'linearArray')!;
+    expect(line.beamBroadside).toMatch(/^\d\.\d+° × ≈ 100°$/); // computed in-plane beam (three figures) × the 6 dBi element's fan, √(41 253/3.98) = 101.8° → 100° at two figures
   });
   it('states what coverage means for every candidate, with the corner angle (±45° × ±45° → 60°)', () => {
     const both = computeArchitectureSizing(validateAll(def, { ...defaultTexts(def), saz: '45 deg', sel: '45 deg' }).inputs!).data;
