@@ -77,12 +77,14 @@ export function sizingRows(data: SizingData): SizingRow[] {
       elements,
       elementGain: c.elementGainDbi === null ? '—' : `${minus(c.elementGainDbi.toFixed(1))} dBi`,
       steering: c.steering,
-      beamBroadside: a !== null && b !== null && Math.abs(a - b) < 1e-3 * Math.max(a, b)
+      beamBroadside: a === null && b === null
+        ? '—'
+        : a !== null && b !== null && Math.abs(a - b) < 1e-3 * Math.max(a, b)
         ? `${approx}${angle(a, figures)}`
         : c.id === 'linearArray'
           ? `${angle(a, figures)} × ≈ ${angle(b, FIGURES.estimate)}` // the fan across the line is the beam-area estimate
           : `${approx}${angle(a, figures)} × ${angle(b, figures)}`,
-      beamEdge: `${approx}${angle(c.hpbwEdgeDeg, figures)}`,
+      beamEdge: c.hpbwEdgeDeg === null ? '—' : `${approx}${angle(c.hpbwEdgeDeg, figures)}`,
       gainBroadside: gain(c.gainBroadsideDbi, c.gainPrecision),
       gainEdge: gain(c.gainEdgeDbi, c.gainPrecision),
       sidelobe: c.firstSidelobeDb === null ? 'not modelled' : `${minus(c.firstSidelobeDb.toFixed(1))} dB`,

@@ -34,6 +34,8 @@ describe('sizing table rows', () => {
     const dish = rows.find((r) => r.id === 'reflector')!;
     expect(dish.gainBroadside).toMatch(/^\d+\.\d dBi$/);
     expect(dish.beamBroadside).toMatch(/^\d\.\d{2}°$/); // e.g. 5.38°
+    const ring = rows.find((r) => r.id === 'ringArray')!; // 28 dBi needs more ring elements than the sizing evaluates: no beams
+    expect([ring.beamBroadside, ring.beamEdge]).toEqual(['—', '—']);
     const line = rows.find((r) => r.id === 'linearArray')!;
     expect(line.beamBroadside).toMatch(/^\d\.\d+° × ≈ 100°$/); // computed in-plane beam (three figures) × the 6 dBi element's fan, √(41 253/3.98) = 101.8° → 100° at two figures
   });
