@@ -3,6 +3,7 @@ export * from './candidate';
 export * from './coverage';
 export * from './candidateChecks';
 export * from './uniformSidelobe';
+export * from './firstSidelobe';
 export * from './reflectorCandidate';
 export * from './planarCandidate';
 export * from './lineCandidate';
