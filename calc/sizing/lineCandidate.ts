@@ -2,7 +2,7 @@ import { freeSpaceWavelengthM } from '../wavelength';
 import { uniformLineHpbwDeg } from '../scanLoss';
 import { hpbwFromDirectivityDeg } from '../endFire/stacking';
 import { enclosingDiscAreaM2, type Candidate, type SizingRequirement } from './candidate';
-import { cornerScanLossDb, lineCountForHpbw, sizingSpacingM } from './planarCandidate';
+import { cornerScanLossDb, lineCountForHpbw, MAX_LINE_BEAM_ELEMENTS, sizingSpacingM } from './planarCandidate';
 import { UNIFORM_FIRST_SIDELOBE_DB } from './uniformSidelobe';
 
 /**
@@ -48,6 +48,8 @@ export function sizeLinearArray(requirement: SizingRequirement): Candidate {
   const cellGainDbi = 10 * Math.log10((4 * Math.PI * d * heightM) / (lambda * lambda));
   const fan = elementBeamwidthDeg(elementGainDbi);
   const flags: Candidate['flags'] = [];
+  const beamComputable = count <= MAX_LINE_BEAM_ELEMENTS;
+  if (!beamComputable) flags.push({ code: 'line-too-long', kind: 'practical', message: `impractical: needs ${count.toExponential(2)} elements, more than the ${MAX_LINE_BEAM_ELEMENTS.toExponential(0)} whose beam the sizing computes` });
   if (requirement.scanElevationDeg > 0) flags.push({ code: 'one-plane-scan', kind: 'coverage', message: 'scans electronically in azimuth only; the elevation range needs a mechanical tilt' });
   const sizeM = Math.max(lengthM, heightM);
   const enclosingDiameterM = Math.hypot(lengthM, heightM);
@@ -66,8 +68,8 @@ export function sizeLinearArray(requirement: SizingRequirement): Candidate {
     gainBroadsideDbi: gainBroadside,
     gainEdgeDbi: gainBroadside + loss,
     gainPrecision: 'computed',
-    hpbwBroadsideDeg: [uniformLineHpbwDeg(count, d / lambda, 0), fan],
-    hpbwEdgeDeg: uniformLineHpbwDeg(count, d / lambda, scan),
+    hpbwBroadsideDeg: [beamComputable ? uniformLineHpbwDeg(count, d / lambda, 0) : null, fan],
+    hpbwEdgeDeg: beamComputable ? uniformLineHpbwDeg(count, d / lambda, scan) : null,
     // The in-plane beam is computed; the fan across the line is the beam-area estimate (the table shows it to two figures).
     beamPrecision: 'computed',
     firstSidelobeDb: UNIFORM_FIRST_SIDELOBE_DB,

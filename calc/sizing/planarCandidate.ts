@@ -5,6 +5,9 @@ import { enclosingDiscAreaM2, type Candidate, type SizingRequirement } from './c
 import { coverageCornerScanDeg, coverageSpacingLimitWavelengths } from './coverage';
 import { UNIFORM_FIRST_SIDELOBE_DB } from './uniformSidelobe';
 
+/** Most elements across a line or face whose beam the sizing computes (the limit of uniformLineHpbwDeg); more is flagged impractical. */
+export const MAX_LINE_BEAM_ELEMENTS = 1e7;
+
 /**
  * Grating-lobe-free spacing over the coverage ±azimuthDeg × ±elevationDeg at the highest
  * frequency, less the team margin, m (coverage.ts states the region's convention).
@@ -61,7 +64,9 @@ export function sizePlanarArray(requirement: SizingRequirement, lattice: Lattice
   const countTri = Math.max(1, Math.ceil(areaM2 / (latticeCellAreaPerSpacingSquared('triangular') * dTri * dTri)));
   const across = Math.max(2, Math.round(widthM / d));
   const gainBroadside = 10 * Math.log10(eta * apertureDirectivity(areaM2, lambda));
-  const hpbw0 = uniformLineHpbwDeg(across, d / lambda, 0);
+  const beamComputable = across <= MAX_LINE_BEAM_ELEMENTS;
+  const hpbw0 = beamComputable ? uniformLineHpbwDeg(across, d / lambda, 0) : null;
+  const flags: Candidate['flags'] = beamComputable ? [] : [{ code: 'face-too-large', kind: 'practical', message: `impractical: ${across.toExponential(2)} elements across, more than the ${MAX_LINE_BEAM_ELEMENTS.toExponential(0)} whose beam the sizing computes` }];
   const elementGainDbi = 10 * Math.log10(apertureDirectivity(cellM2, lambda));
   const diagonalM = widthM * Math.SQRT2;
   return {
@@ -82,10 +87,10 @@ export function sizePlanarArray(requirement: SizingRequirement, lattice: Lattice
     gainEdgeDbi: gainBroadside + loss,
     gainPrecision: 'computed',
     hpbwBroadsideDeg: [hpbw0, hpbw0],
-    hpbwEdgeDeg: corner > 0 ? uniformLineHpbwDeg(across, d / lambda, corner) : hpbw0,
+    hpbwEdgeDeg: corner > 0 && beamComputable ? uniformLineHpbwDeg(across, d / lambda, corner) : hpbw0,
     beamPrecision: 'computed',
     firstSidelobeDb: UNIFORM_FIRST_SIDELOBE_DB,
-    flags: [],
+    flags,
     fits: true,
     notes: [
       `Square face ${Number(widthM.toPrecision(3))} m wide (diagonal ${Number(diagonalM.toPrecision(3))} m). Spacing ${(d / freeSpaceWavelengthM(requirement.frequencyHighHz)).toFixed(3)} λ at the highest frequency (grating-lobe-free over the region with the team margin); each element fills a cell of ${(cellM2 / (lambda * lambda)).toFixed(2)} λ², so it must reach ${elementGainDbi.toFixed(1)} dBi at the lowest frequency. Beam at the corner from the face's width as a uniform line scanned in the plane through the corner; depth is the radiating layer over its backplane only.`,

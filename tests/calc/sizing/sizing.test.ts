@@ -117,3 +117,29 @@ describe('end-fire (Yagi–Uda) candidate', () => {
     expect(candidate({ g: '30 dBi' }, 'endFire').flags.map((f) => f.message).join(' ')).toMatch(/impractical/);
   });
 });
+
+describe('any valid input gives finite numbers, never an exception (property, fast-check)', () => {
+  it('over the whole range of every field, including 80 dBi at ±85° (which needs more elements than a beam can be computed for)', () => {
+    fc.assert(
+      fc.property(
+        fc.double({ min: 6, max: 12, noNaN: true }),
+        fc.constantFrom('gain', 'hpbw'),
+        fc.double({ min: 0, max: 80, noNaN: true }),
+        fc.double({ min: 0.01, max: 120, noNaN: true }),
+        fc.double({ min: 0, max: 85, noNaN: true }),
+        fc.double({ min: 0, max: 85, noNaN: true }),
+        fc.double({ min: 0.5, max: 10, noNaN: true }),
+        fc.double({ min: -5, max: 20, noNaN: true }),
+        fc.constantFrom('rectangular', 'triangular'),
+        (logF, req, g, bw, saz, sel, nexp, ge, lat) => {
+          const r = computeArchitectureSizing(inputsOf({ f: `${10 ** logF} Hz`, req, g: `${g} dBi`, bw: `${bw} deg`, saz: `${saz} deg`, sel: `${sel} deg`, uaz: 'yes', nexp: String(nexp), ge: `${ge} dBi`, lat }));
+          for (const [key, v] of Object.entries(r.values)) if (v !== null) expect(Number.isFinite(v), key).toBe(true);
+          for (const c of r.data.candidates) for (const v of [c.sizeM, c.footprintM2, c.depthM, c.gainBroadsideDbi, c.gainEdgeDbi]) expect(Number.isFinite(v), c.id).toBe(true);
+        },
+      ),
+      { numRuns: 30, seed: 7 },
+    );
+    const extreme = computeArchitectureSizing(inputsOf({ f: '1 MHz', g: '80 dBi', saz: '85 deg', nexp: '10' }));
+    expect(extreme.data.candidates.find((c) => c.id === 'linearArray')!.flags.map((f) => f.code)).toContain('line-too-long');
+  });
+});
