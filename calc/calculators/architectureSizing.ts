@@ -20,6 +20,7 @@ import { coverageCornerScanDeg, coverageSpacingLimitScanDeg, coverageSpacingLimi
 import { rectangularSpacingLimitFormula, triangularSpacingLimitFormula } from '../wavelengthFormulas';
 import { cosineScanLossFormula } from '../scanLossFormulas';
 import { hpbwFromDirectivityFormula } from '../endFireFormulas';
+import { cosineElementExtraLossDb } from '../scanLoss';
 
 export interface SizingData {
   candidates: Candidate[];
@@ -94,7 +95,7 @@ export function computeArchitectureSizing(inputs: CalcInputs): CalcResult<Sizing
   const n = requirement.assumptions.cosineExponent;
   if (n < 1) {
     const arrays = (['linearArray', 'planarArray', 'ringArray', 'yArray'] as const).flatMap((id) => CANDIDATE_OUTPUT_KEYS[id]);
-    const extraDb = 10 * (n - 1) * Math.log10(Math.cos((Math.min(corner, 89.9) * Math.PI) / 180));
+    const extraDb = cosineElementExtraLossDb(Math.min(corner, 89.9), n);
     warnings.push(warning('element-exponent-below-one', 'outside-validity', `Element power pattern cosⁿθ with n = ${n} is below the bound n ≥ 1: the element would add ${extraDb.toFixed(2)} dB at the coverage corner on top of the projected aperture cos θ, more gain than a scanned face can have; the arrays' scan-edge gains are optimistic.`, [...arrays, 'cornerScanDeg']));
   }
   warnings.push(...candidateWarnings(candidates));
