@@ -1,5 +1,6 @@
 /** calc/: the one tested source of numbers. This barrel only re-exports. */
 export * from './constants';
+export * from './beamSolidAngle';
 export * from './angle';
 export * from './angleConvention';
 export * from './decibel';

@@ -4,6 +4,7 @@
  */
 import { CalcInputError, requireInRange, requirePositive } from '../errors';
 import { degToRad } from '../angle';
+import { SPHERE_SQUARE_DEG } from '../beamSolidAngle';
 
 /** Bays in a stack. */
 export type StackBays = 1 | 2 | 4;
@@ -31,17 +32,17 @@ export function stackingDistanceWavelengths(hpbwDeg: number): number {
 
 /**
  * HPBW (degrees) of a beam with equal E- and H-plane widths and directivity D, from the
- * beam-area estimate D ≈ 41 253 / (θ_E θ_H) with both in degrees (41 253 = 4π (180/π)²;
+ * beam-area estimate D ≈ 41 253 / (θ_E θ_H) with both in degrees (SPHERE_SQUARE_DEG, calc/beamSolidAngle.ts;
  * Kraus, "Antennas", 2nd ed., §2-13 (section number from memory); an estimate for a single main beam without large sidelobes).
  */
 export function hpbwFromDirectivityDeg(directivity: number): number {
   requirePositive('directivity', directivity);
-  const beamAreaDeg2 = (4 * Math.PI * (180 / Math.PI) ** 2) / directivity;
+  const beamAreaDeg2 = SPHERE_SQUARE_DEG / directivity;
   return Math.min(180, Math.sqrt(beamAreaDeg2));
 }
 
 /** Inverse of hpbwFromDirectivityDeg: directivity of a beam with equal E- and H-plane HPBW (degrees), D ≈ 41 253/θ². */
 export function directivityForEqualPlaneHpbw(hpbwDeg: number): number {
   requireInRange('hpbwDeg', hpbwDeg, 1e-6, 180, '°');
-  return (4 * Math.PI * (180 / Math.PI) ** 2) / (hpbwDeg * hpbwDeg);
+  return SPHERE_SQUARE_DEG / (hpbwDeg * hpbwDeg);
 }

@@ -1,5 +1,9 @@
 /** Requirement-to-architecture sizing: re-exports only. */
 export * from './candidate';
+export * from './coverage';
+export * from './candidateChecks';
+export * from './uniformSidelobe';
+export * from './firstSidelobe';
 export * from './reflectorCandidate';
 export * from './planarCandidate';
 export * from './lineCandidate';

@@ -83,6 +83,8 @@ describe('aperture gain agrees across pages (within 0.01 dB)', () => {
           hpbwDeg: 1,
           scanAzimuthDeg: 0,
           scanElevationDeg: 0,
+          uniformBeam: false,
+          maxSidelobeDb: null,
           limits: { maxSizeM: null, maxElements: null, maxDepthM: null },
           assumptions: { reflectorEfficiency: dish.efficiency, arrayRadiationEfficiency: 0.8, cosineExponent: 1.2, spacingMarginFraction: 0.05, elementGainDbi: 5 },
         };

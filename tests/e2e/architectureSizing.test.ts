@@ -23,8 +23,17 @@ describe('architecture sizing in Chromium', () => {
     for (const id of ['reflector', 'linearArray', 'planarArray', 'ringArray', 'yArray']) expect(ids).toContain(id);
     // the linear array cannot scan in elevation and is longer than 1.5 m
     const linearStatus = await page.locator('[data-status="linearArray"]').innerText();
-    expect(linearStatus).toMatch(/one plane only/);
+    expect(linearStatus).toMatch(/azimuth only/);
     expect(linearStatus).toMatch(/size limit/);
+    // coverage is stated once for every candidate, with the corner: acos(cos 45° · cos 20°) = acos(0.6645) = 48.4° (hand-worked)
+    expect(await page.locator('[data-testid="coverage-statement"]').innerText()).toMatch(/±45° in azimuth × ±20° in elevation.*48\.4°/);
+    // the recommendation rule is on the page
+    expect(await page.locator('[data-testid="recommendation-rule"]').innerText()).toMatch(/smallest footprint/);
+    // a candidate that does not fit is marked in the table, in the sketch and in the results (the 34 dBi Yagi–Uda is impractical)
+    expect(await page.locator('tr.candidate-row[data-candidate="endFire"]').getAttribute('data-fits')).toBe('no');
+    expect(await page.locator('tr.candidate-row[data-candidate="endFire"] th').innerText()).toMatch(/✖/);
+    expect(await page.locator('[data-plot="outline-sketch"] [data-candidate="endFire"]').textContent()).toMatch(/✖/);
+    expect(await page.locator('[data-output="endFireLengthM"] .flag').count()).toBe(1);
     // one candidate is recommended and marked without colour alone (★ and the word)
     expect(await page.locator('tr.candidate-row.chosen').count()).toBe(1);
     expect(await page.locator('tr.candidate-row.chosen th').innerText()).toMatch(/★/);
@@ -33,8 +42,10 @@ describe('architecture sizing in Chromium', () => {
     await page.getByRole('button', { name: 'Copy as Markdown' }).click();
     await expect.poll(() => page.locator('.share-status').innerText()).toBe('Markdown copied.');
     const md = await page.evaluate(() => navigator.clipboard.readText());
-    expect(md).toContain('| Architecture | Size |');
+    expect(md).toContain('| Architecture | Largest dimension |');
     expect(md).toContain('Planar phased array');
+    expect(md).toContain('Coverage for every candidate');
+    expect(md).toContain('smallest footprint');
     await closeClean({ outside, errors, context });
   });
 

@@ -30,14 +30,16 @@ describe('architecture sizing round-trips with each architecture’s own calcula
   });
   it('planar array: the scan-loss calculator, given the sized width, returns the required gain at the scan edge', () => {
     const c = candidate({ g: '33 dBi', saz: '50 deg', lat: 'rectangular' }, 'planarArray');
-    const scan = computeScanLoss({ frequencyHz: 10e9, spacingM: c.spacingM!, lattice: 'rectangular', sizeBy: 'width', apertureWidthM: c.sizeM, elementCount: 4, scanMaxDeg: 50, elementModel: 'cosine', cosineExponent: teamConventions.elementPowerExponent, radiationEfficiency: teamConventions.efficiencies.arrayRadiation, targetGainDbi: null });
+    const widthM = (c.outline as { widthM: number }).widthM;
+    expect(c.sizeM).toBeCloseTo(widthM * Math.SQRT2, 12); // the largest dimension is the diagonal
+    const scan = computeScanLoss({ frequencyHz: 10e9, spacingM: c.spacingM!, lattice: 'rectangular', sizeBy: 'width', apertureWidthM: widthM, elementCount: 4, scanMaxDeg: 50, elementModel: 'cosine', cosineExponent: teamConventions.elementPowerExponent, radiationEfficiency: teamConventions.efficiencies.arrayRadiation, targetGainDbi: null });
     expect(scan.values.gainEdgeDbi).toBeCloseTo(33, 9);
   });
   it('planar array: spacing is the grating-lobe limit at the highest frequency less the team margin (Mailloux §2.1 (section number from memory))', () => {
     const c = candidate({ f: '9 GHz', fhi: '11 GHz', saz: '45 deg', lat: 'triangular' }, 'planarArray');
     expect(c.spacingM).toBeCloseTo(maxGratingFreeSpacingWavelengths(45, 'triangular') * freeSpaceWavelengthM(11e9) * (1 - teamConventions.spacingMarginFraction), 12);
   });
-  it('linear array: N × element gain reaches the requirement (common practice, no source)', () => {
+  it('linear array: the face L × h (4πLh/λ², Balanis 4th ed. ch. 12 (chapter number from memory)) reaches the requirement with N elements and misses it with N − 1', () => {
     const c = candidate({ g: '25 dBi', saz: '30 deg' }, 'linearArray');
     expect(c.gainEdgeDbi).toBeGreaterThanOrEqual(25);
     expect(c.gainEdgeDbi - 10 * Math.log10(c.elementCount! / (c.elementCount! - 1))).toBeLessThan(25);
@@ -46,9 +48,10 @@ describe('architecture sizing round-trips with each architecture’s own calcula
     expect(RING_FIRST_SIDELOBE_DB).toBeCloseTo(-7.9, 1);
   });
   it('ring and Y are sized by the engine when small, and reach the requirement', () => {
-    const ring = candidate({ g: '20 dBi', saz: '0 deg', uaz: 'yes' }, 'ringArray');
+    const ring = candidate({ g: '20 dBi', saz: '0 deg', uaz: 'yes', sll: '' }, 'ringArray');
     expect(ring.gainEdgeDbi).toBeGreaterThanOrEqual(20);
     expect(ring.flags).toEqual([]);
+    expect(ring.fits).toBe(true);
     const y = candidate({ g: '20 dBi', saz: '0 deg', uaz: 'yes' }, 'yArray');
     expect(y.gainEdgeDbi).toBeGreaterThanOrEqual(20);
   });
@@ -57,13 +60,13 @@ describe('architecture sizing round-trips with each architecture’s own calcula
 describe('flags and the recommendation', () => {
   it('a size limit flags the candidates that exceed it, and the recommendation respects it', () => {
     const r = computeArchitectureSizing(inputsOf({ g: '34 dBi', maxsize: '0.5 m' }));
-    for (const c of r.data.candidates) if (c.sizeM > 0.5) expect(c.flags.join(' ')).toMatch(/size limit/);
+    for (const c of r.data.candidates) if (c.sizeM > 0.5) expect(c.flags.map((f) => f.message).join(' ')).toMatch(/size limit/);
     const chosen = r.data.candidates.find((c) => c.id === r.data.chosenId);
     if (chosen) expect(chosen.sizeM).toBeLessThanOrEqual(0.5);
   });
-  it('elevation scan flags the linear array; a uniform-azimuth need flags planar and linear arrays', () => {
-    expect(candidate({ sel: '20 deg' }, 'linearArray').flags.join(' ')).toMatch(/one plane only/);
-    expect(candidate({ uaz: 'yes', saz: '45 deg' }, 'planarArray').flags.join(' ')).toMatch(/not uniform over azimuth/);
+  it('elevation scan flags the linear array; a uniform-beam need flags the planar array', () => {
+    expect(candidate({ sel: '20 deg' }, 'linearArray').flags.map((f) => f.code)).toContain('one-plane-scan');
+    expect(candidate({ uaz: 'yes', saz: '45 deg' }, 'planarArray').flags.map((f) => f.code)).toContain('beam-broadens-with-scan');
   });
   it('nothing fits under impossible limits: a caution says so', () => {
     const r = computeArchitectureSizing(inputsOf({ g: '40 dBi', maxsize: '1 cm' }));
@@ -81,7 +84,7 @@ describe('bigger requirements never give smaller antennas (property, fast-check)
         for (const ca of a) {
           const cb = b.find((c) => c.id === ca.id)!;
           expect(cb.sizeM, ca.id).toBeGreaterThanOrEqual(ca.sizeM * (1 - 1e-9));
-          for (const v of [cb.sizeM, cb.areaM2, cb.gainEdgeDbi]) expect(Number.isFinite(v)).toBe(true);
+          for (const v of [cb.sizeM, cb.footprintM2, cb.gainEdgeDbi]) expect(Number.isFinite(v)).toBe(true);
         }
       }),
       { numRuns: 25 },
@@ -110,7 +113,33 @@ describe('end-fire (Yagi–Uda) candidate', () => {
     expect(yagiGainDbd(boom).gainDbd + 2.15).toBeCloseTo(14, 9);
   });
   it('is flagged impractical past the longest published boom', () => {
-    expect(candidate({ g: '17.5 dBi' }, 'endFire').flags.join(' ')).toMatch(/impractical/);
-    expect(candidate({ g: '30 dBi' }, 'endFire').flags.join(' ')).toMatch(/impractical/);
+    expect(candidate({ g: '17.5 dBi' }, 'endFire').flags.map((f) => f.message).join(' ')).toMatch(/impractical/);
+    expect(candidate({ g: '30 dBi' }, 'endFire').flags.map((f) => f.message).join(' ')).toMatch(/impractical/);
+  });
+});
+
+describe('any valid input gives finite numbers, never an exception (property, fast-check)', () => {
+  it('over the whole range of every field, including 80 dBi at ±85° (which needs more elements than a beam can be computed for)', () => {
+    fc.assert(
+      fc.property(
+        fc.double({ min: 6, max: 12, noNaN: true }),
+        fc.constantFrom('gain', 'hpbw'),
+        fc.double({ min: 0, max: 80, noNaN: true }),
+        fc.double({ min: 0.01, max: 120, noNaN: true }),
+        fc.double({ min: 0, max: 85, noNaN: true }),
+        fc.double({ min: 0, max: 85, noNaN: true }),
+        fc.double({ min: 0.5, max: 10, noNaN: true }),
+        fc.double({ min: -5, max: 20, noNaN: true }),
+        fc.constantFrom('rectangular', 'triangular'),
+        (logF, req, g, bw, saz, sel, nexp, ge, lat) => {
+          const r = computeArchitectureSizing(inputsOf({ f: `${10 ** logF} Hz`, req, g: `${g} dBi`, bw: `${bw} deg`, saz: `${saz} deg`, sel: `${sel} deg`, uaz: 'yes', nexp: String(nexp), ge: `${ge} dBi`, lat }));
+          for (const [key, v] of Object.entries(r.values)) if (v !== null) expect(Number.isFinite(v), key).toBe(true);
+          for (const c of r.data.candidates) for (const v of [c.sizeM, c.footprintM2, c.depthM, c.gainBroadsideDbi, c.gainEdgeDbi]) expect(Number.isFinite(v), c.id).toBe(true);
+        },
+      ),
+      { numRuns: 30, seed: 7 },
+    );
+    const extreme = computeArchitectureSizing(inputsOf({ f: '1 MHz', g: '80 dBi', saz: '85 deg', nexp: '10' }));
+    expect(extreme.data.candidates.find((c) => c.id === 'linearArray')!.flags.map((f) => f.code)).toContain('line-too-long');
   });
 });
