@@ -28,7 +28,7 @@ import {
   type GratingLobe,
   type PlaneMetrics,
 } from '../array/index';
-import { explorerArray, inputsKey, type ExplorerGeometry } from '../explorer/explorerInputs';
+import { explorerArray, inputsKey, sidelobeDepthDb, type ExplorerGeometry } from '../explorer/explorerInputs';
 import { explorerQueryV1toV2 } from '../explorer/explorerLinkMigration';
 import { cutSamples, directivityNeedsQuadrature, MAX_QUADRATURE_WORK, patternWork, quadratureWork, SYNC_BUDGET_EVALUATIONS } from '../explorer/workEstimate';
 import { elementNullWarning, peakOffSteeringWarning, withoutBeamFigures } from '../explorer/beamValidity';
@@ -144,7 +144,7 @@ export function computeArrayExplorer(inputs: CalcInputs, mode: ExplorerMode = 'c
     warnings.push(warning('grating-lobe-at-horizon', severity, `A grating lobe centred just outside visible space reaches into it at the horizon${lobeLevel}; it is not counted as a sidelobe.`, ['gratingLobeDb']));
   }
   if (inputs.taper === 'taylor') {
-    const nbarWarning = taylorNbarWarning(inputs.nbar as number, inputs.sidelobeDb as number, ['sidelobeDb']);
+    const nbarWarning = taylorNbarWarning(inputs.nbar as number, sidelobeDepthDb(inputs), ['sidelobeDb']);
     if (nbarWarning) warnings.push(nbarWarning);
   }
   const offSteering = elementNull || !theta ? null : peakOffSteeringWarning(shownPlanes.map((metrics) => ({ metrics, name: metrics.plane === 'theta' ? 'scan plane' : 'orthogonal plane' })));
@@ -231,9 +231,9 @@ export function createArrayExplorerCalculator(conventions: TeamConventions, opti
       { kind: 'number', key: 'fill', name: 'fillFraction', label: 'Fill fraction (thinned)', defaultText: '0.6', min: 0.05, max: 1, description: 'Share of lattice sites kept by the random thinning.' },
       { kind: 'count', key: 'seed', name: 'seed', label: 'Random seed (thinned)', defaultText: '7', min: 0, max: 4294967295, description: 'Seed of the thinning draw; the same seed always gives the same layout.' },
       { kind: 'choice', key: 'tap', name: 'taper', label: 'Amplitude taper', options: [{ value: 'uniform', label: 'Uniform' }, { value: 'cosine', label: 'Cosine² on a pedestal' }, { value: 'taylor', label: 'Taylor (n̄, sidelobe level)' }, { value: 'chebyshev', label: 'Dolph–Chebyshev (sidelobe level)' }], defaultText: 'uniform', description: 'Amplitude across the aperture: separable (x × y) on full rectangular grids, radial otherwise.' },
-      { kind: 'decibel', key: 'sll', name: 'sidelobeDb', label: 'Design sidelobe level below the peak (Taylor, Chebyshev)', defaultText: '30 dB', min: 13, max: 80, description: 'A positive number of dB below the main beam, e.g. 30 dB.' },
+      { kind: 'levelBelowPeak', key: 'sll', name: 'sidelobeDb', label: 'Design sidelobe level, dB relative to the peak (Taylor, Chebyshev)', defaultText: '-30 dB', min: -80, max: -13, description: 'Negative dB relative to the main beam, e.g. −30 dB (30 dB below the peak); a positive depth such as 30 dB is read as the same level.' },
       { kind: 'count', key: 'nbar', name: 'nbar', label: 'Taylor n̄', defaultText: '5', min: 1, max: 20, description: 'Number of nearly equal sidelobes next to the main beam.' },
-      { kind: 'decibel', key: 'edge', name: 'pedestalDb', label: 'Edge level (cosine² on a pedestal)', defaultText: '-10 dB', min: -60, max: 0, description: 'Field amplitude at the aperture edge relative to the centre.' },
+      { kind: 'levelBelowPeak', key: 'edge', name: 'pedestalDb', label: 'Edge level, dB relative to the centre (cosine² on a pedestal)', defaultText: '-10 dB', min: -60, max: 0, description: 'Field amplitude at the aperture edge relative to the centre, negative dB (a positive depth is read as the same level).' },
       { kind: 'choice', key: 'el', name: 'element', label: 'Element pattern', options: [{ value: 'isotropic', label: 'Isotropic (radiates behind the array too)' }, { value: 'cosine', label: 'Element power pattern cosⁿθ, forward only' }, { value: 'dipoleX', label: 'Half-wave dipole along x' }, { value: 'dipoleY', label: 'Half-wave dipole along y' }], defaultText: 'cosine', description: 'Pattern of each element, multiplied by the array factor. The default is the team\'s element from the conventions. Non-isotropic patterns need directivity by integration (in the background for large arrays).' },
       { kind: 'number', key: 'nexp', name: 'elementPowerExponent', label: 'Element power pattern cosⁿθ, n', defaultText: String(conventions.elementPowerExponent), min: 0, max: 40, usedWhen: { key: 'el', values: ['cosine'] }, description: 'Exponent of the element\'s power pattern (field cos^(n/2) θ); team default from the conventions. n = 2 is a cos θ field pattern.' },
       { kind: 'length', key: 'gp', name: 'groundHeightM', label: 'Ground-plane height below the elements', defaultText: '', min: 0, max: 100, minExclusive: true, optional: true, wavelengthFrom: 'design', description: 'Optional. A perfectly conducting plane this far behind the elements (e.g. 0.25 λ); empty means none.' },
@@ -255,8 +255,8 @@ export function createArrayExplorerCalculator(conventions: TeamConventions, opti
       { key: 'fnbwScanDeg', label: 'FNBW, scan plane', kind: 'angle', digits: 4 },
       { key: 'fnbwCrossDeg', label: 'FNBW, orthogonal plane', kind: 'angle', digits: 4 },
       { key: 'sidelobeDb', label: 'Peak sidelobe level (principal planes)', kind: 'decibel', digits: 4, description: 'Highest sidelobe in the two planes through the beam, forward half space; grating lobes are reported apart' },
-      { key: 'gratingLobeDb', label: 'Highest grating lobe level', kind: 'decibel', digits: 4, description: 'Relative to the main beam, at each grating-lobe direction and in the principal planes (lattice geometries)' },
-      { key: 'peakOffsetDeg', label: 'Beam peak offset from θ₀ (scan plane)', kind: 'angle', digits: 3, description: 'From the element pattern and phase quantization' },
+      { key: 'gratingLobeDb', label: 'Highest grating lobe level', kind: 'decibel', digits: 4, resolution: 1e-4, description: 'Relative to the main beam, at each grating-lobe direction and in the principal planes (lattice geometries)' },
+      { key: 'peakOffsetDeg', label: 'Beam peak offset from θ₀ (scan plane)', kind: 'angle', digits: 3, resolution: 1e-4, description: 'From the element pattern and phase quantization; offsets below 10⁻⁴° (the root-finder resolves about 10⁻⁸°, older searches 10⁻⁶°) are shown as 0' },
       { key: 'gratingLobeCount', label: 'Grating lobes in visible space', kind: 'count', digits: 0 },
       { key: 'onsetDeg', label: 'Grating lobe enters at scan', kind: 'angle', digits: 3, description: 'Worst scan plane; 90° means none at any scan' },
       { key: 'taperEfficiencyPercent', label: 'Taper efficiency', kind: 'percent', digits: 4 },
@@ -288,7 +288,7 @@ export function createArrayExplorerCalculator(conventions: TeamConventions, opti
       'IEEE Std 145-2013, Standard for Definitions of Terms for Antennas.',
     ],
     examples: [
-      { title: 'Rooftop 28 GHz backhaul panel: 16 × 16 square lattice, Taylor 30 dB, steered 25° towards the next mast', query: '?v=2&geo=planar&lat=rectangular&out=rectangle&nx=16&ny=16&d=0.5lambda&f=28GHz&tap=taylor&sll=30dB&nbar=5&el=cosine&nexp=2&th=25deg&ph=0deg&bits=5' },
+      { title: 'Rooftop 28 GHz backhaul panel: 16 × 16 square lattice, Taylor 30 dB, steered 25° towards the next mast', query: '?v=2&geo=planar&lat=rectangular&out=rectangle&nx=16&ny=16&d=0.5lambda&f=28GHz&tap=taylor&sll=-30dB&nbar=5&el=cosine&nexp=2&th=25deg&ph=0deg&bits=5' },
       { title: 'Harbour-patrol ship ring: 48 elements round the mast at 3.1 GHz, beam 20° off the ring axis', query: '?v=2&geo=circular&nx=48&d=0.55lambda&f=3.1GHz&tap=uniform&el=isotropic&th=20deg&ph=40deg' },
       { title: 'Low-band listening station: Y of three 12-element arms at 150 MHz', query: '?v=2&geo=yArms&nx=12&d=1.4m&f=150MHz&tap=uniform&el=isotropic&th=30deg&ph=90deg' },
       { title: 'Too-wide spacing on purpose: a 12-element line at 0.9 λ steered to 35° (grating lobe)', query: '?v=2&geo=linear&nx=12&d=0.9lambda&f=10GHz&tap=uniform&el=isotropic&th=35deg&ph=0deg' },

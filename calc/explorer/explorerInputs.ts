@@ -28,11 +28,19 @@ export interface ExplorerArray {
   cutPhiDeg: number;
 }
 
+/**
+ * The design sidelobe level as the array engine's taper takes it: a positive number of dB below
+ * the peak. The explorer's input is the level relative to the peak (≤ 0, the site's convention).
+ */
+export function sidelobeDepthDb(inputs: CalcInputs): number {
+  return Math.abs(inputs.sidelobeDb as number);
+}
+
 function taperOf(inputs: CalcInputs): Taper {
   switch (inputs.taper) {
     case 'cosine': return { kind: 'cosineOnPedestal', pedestal: 10 ** ((inputs.pedestalDb as number) / 20), exponent: 2 };
-    case 'taylor': return { kind: 'taylor', nbar: inputs.nbar as number, sidelobeDb: inputs.sidelobeDb as number };
-    case 'chebyshev': return { kind: 'chebyshev', sidelobeDb: inputs.sidelobeDb as number };
+    case 'taylor': return { kind: 'taylor', nbar: inputs.nbar as number, sidelobeDb: sidelobeDepthDb(inputs) };
+    case 'chebyshev': return { kind: 'chebyshev', sidelobeDb: sidelobeDepthDb(inputs) };
     default: return { kind: 'uniform' };
   }
 }

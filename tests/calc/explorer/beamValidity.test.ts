@@ -149,3 +149,13 @@ describe('computeArrayExplorer: clean peak offset', () => {
     expect(principalPlaneMetrics(buildArrayModel({ geometry: { kind: 'planar', lattice: 'rectangular', columns: 10, rows: 10, spacingXWavelengths: 0.5 }, steering: { thetaDeg: 30, phiDeg: 10 } })).theta.peakOffsetDeg).toBe(r.values.peakOffsetDeg);
   });
 });
+
+describe('explorer outputs: numerical noise below an output\'s resolution shows as 0', () => {
+  it('the peak offset has a stated resolution, and an offset of 1.54e-7° (the old broadside figure) is shown as 0', async () => {
+    const { formatOutput } = await import('../../../components/frame/format');
+    const spec = explorerDef.outputs.find((o) => o.key === 'peakOffsetDeg')!;
+    expect(spec.resolution).toBe(1e-4);
+    expect(formatOutput(spec, 1.54e-7).text).toBe('0');
+    expect(formatOutput(spec, 0.25).text).toBe('0.25');
+  });
+});
