@@ -63,13 +63,6 @@ export function beamBroadeningFactor(scanDeg: number): number {
   return 1 / Math.cos(degToRad(scanDeg));
 }
 
-/** Broadside directivity bound of a planar aperture with a forward element pattern: 4πA/λ². */
-export function apertureDirectivity(areaM2: number, wavelengthM: number): number {
-  requirePositive('areaM2', areaM2, 'm²');
-  requirePositive('wavelengthM', wavelengthM, 'm');
-  return (4 * Math.PI * areaM2) / (wavelengthM * wavelengthM);
-}
-
 /**
  * Power array factor of a uniform line of N isotropic elements at spacing d/λ steered to θ0,
  * at θ (both from broadside, in the scan plane): [sin(Nψ/2) / (N sin(ψ/2))]², ψ = 2π(d/λ)(sin θ − sin θ0).

@@ -17,6 +17,14 @@ export function apertureGainFromArea(areaM2: number, wavelengthM: number, apertu
   return (apertureEfficiency * 4 * Math.PI * areaM2) / (wavelengthM * wavelengthM);
 }
 
+/** Physical area (m²) whose aperture gain is G (linear) at efficiency η: A = G·λ²/(4πη), the inverse of apertureGainFromArea. */
+export function areaForGainM2(gain: number, wavelengthM: number, apertureEfficiency = 1): number {
+  requirePositive('gain', gain);
+  requirePositive('wavelengthM', wavelengthM, 'm');
+  requireInRange('apertureEfficiency', apertureEfficiency, Number.MIN_VALUE, 1);
+  return (gain * wavelengthM * wavelengthM) / (4 * Math.PI * apertureEfficiency);
+}
+
 /** Gain (linear) of a circular aperture of diameter D: η (πD/λ)² (= η·4πA/λ² with A = πD²/4). */
 export function circularApertureGain(diameterM: number, wavelengthM: number, apertureEfficiency = 1): number {
   requirePositive('diameterM', diameterM, 'm');

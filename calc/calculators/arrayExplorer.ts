@@ -12,7 +12,7 @@ import type { CalcInputs, CalcResult, CalculatorDef } from '../calculator';
 import type { TeamConventions } from '../teamConventions';
 import { warning, type CalcWarning } from '../warnings';
 import { gratingLobeOnsetScanDeg, latticeCellAreaPerSpacingSquared } from '../gratingLobeLimit';
-import { apertureDirectivity } from '../scanLoss';
+import { apertureGainFromArea } from '../aperture/index';
 import { degToRad } from '../angle';
 import { gratingLobeOnsetFormula, wavelengthFormula } from '../wavelengthFormulas';
 import {
@@ -78,7 +78,7 @@ function isMirrorImaged(geometry: ExplorerGeometry, model: ArrayModel): boolean 
 function filledApertureDirectivityDbi(geometry: ExplorerGeometry, count: number, spacingWavelengths: number, lattice: 'rectangular' | 'triangular', thetaDeg: number): number | null {
   if (geometry !== 'planar' || thetaDeg >= 89.9) return null;
   const areaWavelengths2 = count * latticeCellAreaPerSpacingSquared(lattice) * spacingWavelengths * spacingWavelengths;
-  return 10 * Math.log10(apertureDirectivity(areaWavelengths2, 1) * Math.cos(degToRad(thetaDeg)));
+  return 10 * Math.log10(apertureGainFromArea(areaWavelengths2, 1) * Math.cos(degToRad(thetaDeg)));
 }
 
 function worstSidelobe(planes: PlaneMetrics[]): number | null {

@@ -7,7 +7,8 @@ import type { CalcInputs, CalcResult, CalculatorDef } from '../calculator';
 import type { TeamConventions } from '../teamConventions';
 import { freeSpaceWavelengthM } from '../wavelength';
 import { gratingLobeOnsetScanDeg, latticeCellAreaPerSpacingSquared, type Lattice } from '../gratingLobeLimit';
-import { apertureDirectivity, beamBroadeningFactor, scanLossPartsDb, uniformLineHpbwDeg, type ElementModel } from '../scanLoss';
+import { apertureGainFromArea } from '../aperture/index';
+import { beamBroadeningFactor, scanLossPartsDb, uniformLineHpbwDeg, type ElementModel } from '../scanLoss';
 import { warning, type CalcWarning } from '../warnings';
 import { frequencyDefaultText } from './defaultText';
 import { beamBroadeningFormula, cosineScanLossFormula, currentSheetFormula } from '../scanLossFormulas';
@@ -62,7 +63,7 @@ export function computeScanLoss(inputs: CalcInputs): CalcResult<ScanLossData> {
   const widthM = Math.sqrt(areaM2);
   const lineCount = Math.min(MAX_LINE_ELEMENTS, Math.max(2, Math.round(widthM / spacingM)));
 
-  const d0 = apertureDirectivity(areaM2, lambda);
+  const d0 = apertureGainFromArea(areaM2, lambda);
   const directivityDbi = 10 * Math.log10(d0);
   const gainBroadsideDbi = directivityDbi + 10 * Math.log10(efficiency);
   const edge = scanLossPartsDb(scanMax, model, exponent);

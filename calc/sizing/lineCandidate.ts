@@ -1,4 +1,5 @@
 import { freeSpaceWavelengthM } from '../wavelength';
+import { apertureGainFromArea } from '../aperture/index';
 import { uniformLineHpbwDeg } from '../scanLoss';
 import { hpbwFromDirectivityDeg } from '../endFire/stacking';
 import { enclosingDiscAreaM2, type Candidate, type SizingRequirement } from './candidate';
@@ -35,7 +36,7 @@ export function sizeLinearArray(requirement: SizingRequirement): Candidate {
   const loss = cornerScanLossDb(requirement, scan, 0);
   const d = sizingSpacingM(requirement, 'rectangular', scan, 0);
   const heightM = lineElementHeightM(elementGainDbi, lambda);
-  const directivityPerMetre = (4 * Math.PI * heightM) / (lambda * lambda);
+  const directivityPerMetre = apertureGainFromArea(heightM, lambda); // a strip of height h, per metre of length
   let count: number;
   if (requirement.kind === 'gain') {
     const lengthNeededM = 10 ** ((requirement.gainEdgeDbi - 10 * Math.log10(eta) - loss) / 10) / directivityPerMetre;
@@ -45,7 +46,7 @@ export function sizeLinearArray(requirement: SizingRequirement): Candidate {
   }
   const lengthM = count * d;
   const gainBroadside = 10 * Math.log10(eta * directivityPerMetre * lengthM);
-  const cellGainDbi = 10 * Math.log10((4 * Math.PI * d * heightM) / (lambda * lambda));
+  const cellGainDbi = 10 * Math.log10(apertureGainFromArea(d * heightM, lambda));
   const fan = elementBeamwidthDeg(elementGainDbi);
   const flags: Candidate['flags'] = [];
   const beamComputable = count <= MAX_LINE_BEAM_ELEMENTS;

@@ -1,6 +1,7 @@
 import { freeSpaceWavelengthM } from '../wavelength';
 import { latticeCellAreaPerSpacingSquared, type Lattice } from '../gratingLobeLimit';
-import { apertureDirectivity, scanLossPartsDb, uniformLineHpbwDeg } from '../scanLoss';
+import { scanLossPartsDb, uniformLineHpbwDeg } from '../scanLoss';
+import { apertureGainFromArea, areaForGainM2 } from '../aperture/index';
 import { enclosingDiscAreaM2, type Candidate, type SizingRequirement } from './candidate';
 import { coverageCornerScanDeg, coverageSpacingLimitWavelengths } from './coverage';
 import { UNIFORM_FIRST_SIDELOBE_DB } from './uniformSidelobe';
@@ -53,7 +54,7 @@ export function sizePlanarArray(requirement: SizingRequirement, lattice: Lattice
   const d = lattice === 'triangular' ? dTri : dRect;
   let areaM2: number;
   if (requirement.kind === 'gain') {
-    areaM2 = (lambda * lambda) / (4 * Math.PI) * 10 ** ((requirement.gainEdgeDbi - 10 * Math.log10(eta) - loss) / 10);
+    areaM2 = areaForGainM2(10 ** ((requirement.gainEdgeDbi - loss) / 10), lambda, eta);
   } else {
     const side = lineCountForHpbw(d / lambda, requirement.hpbwDeg) * d;
     areaM2 = side * side;
@@ -63,11 +64,11 @@ export function sizePlanarArray(requirement: SizingRequirement, lattice: Lattice
   const countRect = Math.max(1, Math.ceil(areaM2 / (latticeCellAreaPerSpacingSquared('rectangular') * dRect * dRect)));
   const countTri = Math.max(1, Math.ceil(areaM2 / (latticeCellAreaPerSpacingSquared('triangular') * dTri * dTri)));
   const across = Math.max(2, Math.round(widthM / d));
-  const gainBroadside = 10 * Math.log10(eta * apertureDirectivity(areaM2, lambda));
+  const gainBroadside = 10 * Math.log10(apertureGainFromArea(areaM2, lambda, eta));
   const beamComputable = across <= MAX_LINE_BEAM_ELEMENTS;
   const hpbw0 = beamComputable ? uniformLineHpbwDeg(across, d / lambda, 0) : null;
   const flags: Candidate['flags'] = beamComputable ? [] : [{ code: 'face-too-large', kind: 'practical', message: `impractical: ${across.toExponential(2)} elements across, more than the ${MAX_LINE_BEAM_ELEMENTS.toExponential(0)} whose beam the sizing computes` }];
-  const elementGainDbi = 10 * Math.log10(apertureDirectivity(cellM2, lambda));
+  const elementGainDbi = 10 * Math.log10(apertureGainFromArea(cellM2, lambda));
   const diagonalM = widthM * Math.SQRT2;
   return {
     id: 'planarArray',

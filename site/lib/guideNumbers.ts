@@ -1,6 +1,7 @@
 /**
  * Every number the guide (site/pages/guide/) quotes, computed with calc/ at build time and formatted
- * for prose. Guide pages import `g` and write `{g.ruzeLambda16Db}` instead of typing a number, so the
+ * for prose. Guide pages import { apertureGainFromArea } from '../../calc/aperture/index';
+import `g` and write `{g.ruzeLambda16Db}` instead of typing a number, so the
  * prose follows calc/ after every change; tests/site/guideNumbers.test.ts fails on a number in the
  * prose that does not come from here (a short allow-list covers scenario inputs, counts that define a
  * scenario and section numbers). `npx tsx scripts/guideNumbers.ts` prints the same table.
@@ -253,10 +254,10 @@ export const GUIDE_NUMBERS = {
   sectorNullGHz: () => fixed(value(sector(), 'nullFrequencyHz') / 1e9, 1),
 
   // Planar and conformal
-  harbourApertureDbi: () => fixed(dB((4 * Math.PI * 1.2 * 0.4) / freeSpaceWavelengthM(10e9) ** 2), 1),
+  harbourApertureDbi: () => fixed(dB(apertureGainFromArea(1.2 * 0.4, freeSpaceWavelengthM(10e9))), 1),
   mirrorBeamDb: () => fixed(dB(2), 0),
   planar16SideWavelengths: () => fixed(16 * 0.5, 0),
-  planar16ApertureDbi: () => fixed(dB(4 * Math.PI * (16 * 0.5) ** 2), 1),
+  planar16ApertureDbi: () => fixed(dB(apertureGainFromArea((16 * 0.5) ** 2, 1)), 1),
   planar16IsotropicDbi: () => fixed(planarIso().directivity.directivityDbi, 1),
   planar16CosineDbi: () => fixed(planarCos().directivity.directivityDbi, 1),
   sizingFaceWidthM: () => fixed(value(sizing(), 'planarWidthM'), 2),

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
+import { apertureGainFromArea } from '../../calc/aperture/index';
 import fc from 'fast-check';
 import {
-  apertureDirectivity,
   beamBroadeningFactor,
   cosineElementExtraLossDb,
   currentSheetMismatchLossDb,
@@ -45,7 +45,7 @@ describe('scan-loss parts', () => {
     expect(beamBroadeningFactor(60)).toBeCloseTo(2, 12);
   });
   it('aperture directivity 4πA/λ²: 1 m² at λ = 0.1 m is 1256.6 (31.0 dBi)', () => {
-    expect(apertureDirectivity(1, 0.1)).toBeCloseTo(400 * Math.PI, 9);
+    expect(apertureGainFromArea(1, 0.1)).toBeCloseTo(400 * Math.PI, 9);
   });
   it('rejects scan angles at or beyond the horizon', () => {
     expect(() => projectedApertureLossDb(90)).toThrow(/scanDeg/);

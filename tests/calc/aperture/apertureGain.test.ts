@@ -44,3 +44,18 @@ describe('inverses', () => {
     expect(() => efficiencyForGain(30, 0, 0.1)).toThrow(CalcInputError);
   });
 });
+
+describe('areaForGainM2: the inverse of the aperture relation', () => {
+  it('areaForGainM2(apertureGainFromArea(A, λ, η), λ, η) = A (hand-worked identity of G = η·4πA/λ²)', async () => {
+    const { apertureGainFromArea, areaForGainM2 } = await import('../../../calc/aperture/index');
+    for (const [area, lambda, eta] of [[1, 0.03, 0.6], [0.01, 0.5, 1], [250, 0.0107, 0.8]]) {
+      expect(areaForGainM2(apertureGainFromArea(area, lambda, eta), lambda, eta) / area).toBeCloseTo(1, 12);
+    }
+    expect(areaForGainM2(4 * Math.PI, 1)).toBeCloseTo(1, 12); // 4π·1 m²/(1 m)² with η = 1
+  });
+  it('rejects a gain ≤ 0 and an efficiency above 1 with CalcInputError', async () => {
+    const { areaForGainM2 } = await import('../../../calc/aperture/index');
+    expect(() => areaForGainM2(0, 1)).toThrow(/gain/);
+    expect(() => areaForGainM2(10, 1, 1.2)).toThrow(/apertureEfficiency/);
+  });
+});
