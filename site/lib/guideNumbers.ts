@@ -1,13 +1,13 @@
 /**
  * Every number the guide (site/pages/guide/) quotes, computed with calc/ at build time and formatted
- * for prose. Guide pages import { apertureGainFromArea } from '../../calc/aperture/index';
-import `g` and write `{g.ruzeLambda16Db}` instead of typing a number, so the
+ * for prose. Guide pages import `g` and write `{g.ruzeLambda16Db}` instead of typing a number, so the
  * prose follows calc/ after every change; tests/site/guideNumbers.test.ts fails on a number in the
  * prose that does not come from here (a short allow-list covers scenario inputs, counts that define a
  * scenario and section numbers). `npx tsx scripts/guideNumbers.ts` prints the same table.
  *
  * Each entry is computed on first use and cached, so a page pays only for the numbers it shows.
  */
+import { apertureGainFromArea } from '../../calc/aperture/index';
 import { calculatorFactories } from '../../calc/calculators/index';
 import { teamConventions } from '../conventions';
 import { decodeState } from '../../components/frame/urlState';
