@@ -119,18 +119,3 @@ export const apertureExposureFormula = defineFormula({
   },
 });
 
-export const farFieldBoundaryFormula = defineFormula({
-  id: 'far-field-boundary',
-  title: 'Far-field boundary of an aperture',
-  latex: 'R_{\\mathrm{ff}} = \\frac{2D^2}{\\lambda}',
-  symbols: [
-    { symbol: 'R_{\\mathrm{ff}}', meaning: 'distance beyond which the far-field pattern holds (phase error ≤ π/8 across the aperture)', unit: 'm' },
-    { symbol: 'D', meaning: 'largest aperture dimension', unit: 'm' },
-    { symbol: '\\lambda', meaning: 'free-space wavelength', unit: 'm' },
-  ],
-  validity: 'Apertures large compared with λ; the π/8 phase criterion.',
-  source: 'IEEE Std 149-2021, IEEE Recommended Practice for Antenna Measurements (far-field criterion); Balanis, Antenna Theory, 4th ed., §2.2.4 (section number from memory).',
-  argNames: ['apertureDiameterM', 'frequencyHz'],
-  evaluate: ({ apertureDiameterM, frequencyHz }) => farFieldBoundaryM(apertureDiameterM, frequencyHz),
-  example: { args: { apertureDiameterM: 3, frequencyHz: 299_792_458 * 10 }, expected: 180, tolerance: 1e-9, source: 'hand-worked: λ = 0.1 m, 2·9/0.1 = 180 m' },
-});

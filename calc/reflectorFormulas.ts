@@ -221,23 +221,6 @@ export const beamTiltFormula = defineFormula({
   },
 });
 
-/** Far-field distance 2D²/λ. */
-export const farFieldFormula = defineFormula({
-  id: 'far-field-distance',
-  title: 'Far-field (Fraunhofer) distance',
-  latex: 'R_{\\mathrm{ff}} = \\frac{2D^{2}}{\\lambda}',
-  symbols: [
-    { symbol: 'R_{\\mathrm{ff}}', meaning: 'distance beyond which the aperture phase error is at most π/8', unit: 'm' },
-    { symbol: 'D', meaning: 'aperture diameter', unit: 'm' },
-    { symbol: '\\lambda', meaning: 'free-space wavelength', unit: 'm' },
-  ],
-  validity: 'Apertures large against λ; measurements of low sidelobes need more distance.',
-  source: 'IEEE Std 149-2021, IEEE Recommended Practice for Antenna Measurements (far-field criterion).',
-  argNames: ['diameterM', 'frequencyHz'],
-  evaluate: ({ diameterM, frequencyHz }) => farFieldDistanceM(diameterM, freeSpaceWavelengthM(frequencyHz)),
-  example: { args: { diameterM: 3, frequencyHz: 299_792_458 * 10 }, expected: 180, tolerance: 1e-9, source: 'hand-worked: λ = 0.1 m, 2 × 9 / 0.1 = 180 m' },
-});
-
 /** Pointing error for a given loss, Gaussian-beam rule. */
 export const pointingFormula = defineFormula({
   id: 'pointing-error-for-loss',

@@ -2,6 +2,7 @@
  * Range & RF exposure: Friis link range (or the gain a range needs), free-space path loss in the
  * ITU-R P.525 form, EIRP, power density and the distance to an exposure limit.
  */
+import { farFieldDistanceFormula } from '../aperture/formulas';
 import type { CalcInputs, CalcResult, CalculatorDef } from '../calculator';
 import type { TeamConventions } from '../teamConventions';
 import { freeSpaceWavelengthM } from '../wavelength';
@@ -23,7 +24,6 @@ import { apertureGainDbi, diameterForGainM, efficiencyForGain } from '../apertur
 import {
   apertureExposureFormula,
   distanceToLimitFormula,
-  farFieldBoundaryFormula,
   farFieldDensityFormula,
   freeSpacePathLossFormula,
   friisRangeFormula,
@@ -280,7 +280,7 @@ export function createRangeExposureCalculator(conventions: TeamConventions): Cal
             ? null
             : { transmitPowerW: i.transmitPowerW as number, apertureDiameterM: i.apertureDiameterM as number, apertureEfficiency: (v.impliedEfficiencyPercent as number) / 100, frequencyHz: i.frequencyHz as number, limitWPerM2: v.limitWPerM2 as number },
       },
-      { formula: farFieldBoundaryFormula, output: 'farFieldBoundaryM', args: (i) => (i.apertureDiameterM === null ? null : { apertureDiameterM: i.apertureDiameterM as number, frequencyHz: i.frequencyHz as number }) },
+      { formula: farFieldDistanceFormula, output: 'farFieldBoundaryM', args: (i) => (i.apertureDiameterM === null ? null : { apertureDiameterM: i.apertureDiameterM as number, frequencyHz: i.frequencyHz as number }) },
     ],
     assumptions: [
       'Free-space propagation with a clear line of sight; no ground reflection, multipath, rain or gaseous absorption beyond what you put in “other losses”.',

@@ -4,6 +4,7 @@
  * transform of the aperture field, the optimum edge taper, beam steering by a lateral feed offset
  * (and a focal-plane cluster), far-field distance and pointing tolerances.
  */
+import { farFieldDistanceFormula } from '../aperture/formulas';
 import type { CalcInputs, CalcResult, CalculatorDef } from '../calculator';
 import type { TeamConventions } from '../teamConventions';
 import { CalcInputError, requireInRange, requireInteger, requireNonNegative, requirePositive } from '../errors';
@@ -49,7 +50,6 @@ import {
   centralBlockageFormula,
   dishDepthFormula,
   edgeTaperFormula,
-  farFieldFormula,
   pointingFormula,
   reflectorGainFormula,
   rimHalfAngleFormula,
@@ -473,7 +473,7 @@ export function createReflectorCalculator(conventions: TeamConventions): Calcula
       },
       { formula: beamDeviationFormula, output: 'beamDeviationFactor', args: (i) => ({ focalRatio: i.focalRatio as number }) },
       { formula: beamTiltFormula, output: 'beamTiltDeg', args: (i, v) => ({ offsetM: v.feedOffsetM as number, focalLengthM: v.focalLengthM as number, focalRatio: i.focalRatio as number }) },
-      { formula: farFieldFormula, output: 'farFieldDistanceM', args: (i, v) => ({ diameterM: v.diameterM as number, frequencyHz: i.frequencyHz as number }) },
+      { formula: farFieldDistanceFormula, output: 'farFieldDistanceM', args: (i, v) => ({ apertureDiameterM: v.diameterM as number, frequencyHz: i.frequencyHz as number }) },
       { formula: pointingFormula, output: 'pointingOneDbDeg', args: (_i, v) => (v.hpbwDeg === null ? null : { lossDb: 1, hpbwDeg: v.hpbwDeg }) },
     ],
     assumptions: [

@@ -9,6 +9,12 @@ import { teamConventions } from '../../site/conventions';
 // Ties each displayed formula to the function it names: worked example per formula, and the
 // calculators' outputs equal formula.evaluate on the same inputs.
 describe('formula catalog', () => {
+  it('each displayed relation has one home: no two catalog formulas share their LaTeX (spaces and braces ignored)', () => {
+    const key = (latex: string) => latex.replace(/[\s{}]/g, '');
+    const byLatex = new Map<string, string[]>();
+    for (const f of formulaCatalog) byLatex.set(key(f.latex), [...(byLatex.get(key(f.latex)) ?? []), f.id]);
+    expect([...byLatex.values()].filter((ids) => ids.length > 1)).toEqual([]);
+  });
   it('holds formulas with unique ids', () => {
     expect(formulaCatalog.length).toBeGreaterThan(0);
     const ids = formulaCatalog.map((f) => f.id);
