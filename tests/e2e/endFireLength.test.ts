@@ -76,7 +76,8 @@ describe('end-fire length calculator in Chromium', () => {
     await page.goto(siteUrl('calculators/end-fire-length/?v=1&f=145MHz&type=yagi&solve=length&g=16dBi&bays=4'));
     await waitForCalculator(page, ID);
     expect(await outputText(page, 'gainDbi')).toMatch(/16\.00 dBi$/);
-    expect(await outputText(page, 'stackLowDbi')).toMatch(/21\.00 dBi$/);
+    // A rule-of-thumb figure is shown to 0.1 dB (the output's decimals), which is what it supports.
+    expect(await outputText(page, 'stackLowDbi')).toMatch(/21\.0 dBi$/);
     expect(await page.locator('[data-code="stacking-practice"]').count()).toBe(1);
     await typeInto(page, ID, 'g', '17 dBi');
     await expect.poll(() => outputText(page, 'gainDbi')).toMatch(/17\.00 dBi$/);

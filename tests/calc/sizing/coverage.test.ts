@@ -1,16 +1,9 @@
 import { describe, expect, it } from 'vitest';
+import { runSizing, sizingCandidate } from './runSizing';
 import { coverageCornerPlaneDeg, coverageCornerScanDeg, coverageSpacingLimitWavelengths } from '../../../calc/sizing/coverage';
-import { createArchitectureSizingCalculator, computeArchitectureSizing } from '../../../calc/calculators/architectureSizing';
-import { defaultTexts, validateAll } from '../../../components/frame/calculatorModel';
-import { teamConventions } from '../../../site/conventions';
 
-const def = createArchitectureSizingCalculator(teamConventions);
-const run = (over: Record<string, string>) => {
-  const { inputs } = validateAll(def, { ...defaultTexts(def), ...over });
-  if (!inputs) throw new Error('invalid test inputs');
-  return computeArchitectureSizing(inputs);
-};
-const candidate = (over: Record<string, string>, id: string) => run(over).data.candidates.find((c) => c.id === id)!;
+const run = runSizing;
+const candidate = sizingCandidate;
 
 /** Is any grating lobe of the lattice (reciprocal vectors g, in units of λ/d) inside visible space when the beam is at (u0, v0)? */
 function gratingLobeVisible(u0: number, v0: number, spacingWavelengths: number, reciprocal: [number, number][]): boolean {

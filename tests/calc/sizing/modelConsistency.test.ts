@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
+import { runSizing, sizingCandidate } from './runSizing';
 import fc from 'fast-check';
-import { createArchitectureSizingCalculator, computeArchitectureSizing } from '../../../calc/calculators/architectureSizing';
 import { lineElementHeightM } from '../../../calc/sizing/lineCandidate';
 import { MAX_SPARSE_ELEMENTS, MIN_SPARSE_ELEMENTS, smallestSparseCount } from '../../../calc/sizing/ringCandidates';
 import { firstSidelobeInCutDb } from '../../../calc/sizing/firstSidelobe';
@@ -9,16 +9,10 @@ import { latticeCellAreaPerSpacingSquared } from '../../../calc/gratingLobeLimit
 import { buildArrayModel } from '../../../calc/array/buildArray';
 import { principalPlaneMetrics } from '../../../calc/array/beamMetrics';
 import { freeSpaceWavelengthM } from '../../../calc/wavelength';
-import { defaultTexts, validateAll } from '../../../components/frame/calculatorModel';
 import { teamConventions } from '../../../site/conventions';
 
-const def = createArchitectureSizingCalculator(teamConventions);
-const run = (over: Record<string, string>) => {
-  const { inputs } = validateAll(def, { ...defaultTexts(def), ...over });
-  if (!inputs) throw new Error('invalid test inputs');
-  return computeArchitectureSizing(inputs);
-};
-const candidate = (over: Record<string, string>, id: string) => run(over).data.candidates.find((c) => c.id === id)!;
+const run = runSizing;
+const candidate = sizingCandidate;
 const lambda = freeSpaceWavelengthM(10e9);
 
 describe('one element model for every filled array (each element fills its cell: 4π·cell/λ², Balanis 4th ed. ch. 12 (chapter number from memory))', () => {

@@ -1,21 +1,17 @@
 import { describe, expect, it } from 'vitest';
+import { runSizing, sizingCandidate, sizingDef } from './runSizing';
 import fc from 'fast-check';
 import { CANDIDATE_OUTPUT_KEYS, createArchitectureSizingCalculator, computeArchitectureSizing } from '../../../calc/calculators/architectureSizing';
 import { chooseCandidate, RECOMMENDATION_RULE } from '../../../calc/sizing/chooseCandidate';
 import { requirementReasons } from '../../../calc/sizing/candidateChecks';
 import { computeReflector } from '../../../calc/calculators/reflector';
 import { freeSpaceWavelengthM } from '../../../calc/wavelength';
-import { defaultTexts, validateAll } from '../../../components/frame/calculatorModel';
 import { teamConventions } from '../../../site/conventions';
 import type { Candidate } from '../../../calc/sizing/candidate';
 
-const def = createArchitectureSizingCalculator(teamConventions);
-const run = (over: Record<string, string>) => {
-  const { inputs } = validateAll(def, { ...defaultTexts(def), ...over });
-  if (!inputs) throw new Error('invalid test inputs');
-  return computeArchitectureSizing(inputs);
-};
-const candidate = (over: Record<string, string>, id: string) => run(over).data.candidates.find((c) => c.id === id)!;
+const def = sizingDef;
+const run = runSizing;
+const candidate = sizingCandidate;
 const codes = (c: Candidate) => c.flags.map((f) => f.code);
 
 describe('the recommendation rule is data: fits, reasons, smallest footprint', () => {
