@@ -177,5 +177,5 @@ function levelBelowPeakResult(typed: number, levelDb: number): ParseResult {
   const value = levelDb === 0 ? 0 : levelDb;
   const canonical = value === 0 ? '0dB' : `-${depth}dB`;
   if (typed <= 0) return { ok: true, value, canonical };
-  return { ok: true, value, canonical, note: `${depth} dB read as −${depth} dB, ${depth} dB below the peak` };
+  return { ok: true, value, canonical, note: `${depth} dB entered as a depth: read as −${depth} dB` };
 }

@@ -26,7 +26,7 @@ describe('levels below the peak: one convention on every calculator', () => {
       expect(negative.ok && negative.value).toBe(level);
       expect(positive.ok && positive.value).toBe(level);
       expect(negative.ok && negative.note).toBeUndefined();
-      expect(positive.ok && positive.note).toMatch(/below the peak/);
+      expect(positive.ok && positive.note).toMatch(/entered as a depth: read as −/);
       expect(validateField(p, `${-level} dBi`).ok).toBe(false);
     });
   }

@@ -125,7 +125,7 @@ describe('parseQuantity: levels below the peak (dB relative to the peak, ≤ 0)'
     const r = parseQuantity('30 dB', 'levelBelowPeak');
     expect(r.ok && r.value).toBe(-30);
     expect(r.ok && r.canonical).toBe('-30dB');
-    expect(r.ok && r.note).toBe('30 dB read as −30 dB, 30 dB below the peak');
+    expect(r.ok && r.note).toBe('30 dB entered as a depth: read as −30 dB');
     const zero = parseQuantity('0 dB', 'levelBelowPeak');
     expect(zero.ok && Object.is(zero.value, 0) && zero.canonical).toBe('0dB');
   });
