@@ -35,7 +35,7 @@ export function reflectionMagnitudeFromReturnLossDb(returnLossDb: number): numbe
 /** Mismatch loss in dB (≥ 0) from |Γ| (0 ≤ |Γ| < 1): −10·log10(1 − |Γ|²). */
 export function mismatchLossDb(reflectionMagnitude: number): number {
   requireInRange('reflectionMagnitude', reflectionMagnitude, 0, MAX_REFLECTION);
-  return -10 * Math.log10(1 - reflectionMagnitude * reflectionMagnitude);
+  return 0 - 10 * Math.log10(1 - reflectionMagnitude * reflectionMagnitude); // 0 − 0 is +0: a match shows 0, not −0
 }
 
 /** Mismatch loss in dB from VSWR (≥ 1). */

@@ -57,5 +57,5 @@ export function polarizationMismatchLossDb(
   requireNonNegative('axialRatio1Db', axialRatio1Db, 'dB');
   requireNonNegative('axialRatio2Db', axialRatio2Db, 'dB');
   const p = polarizationEfficiency(axialRatioFromDb(axialRatio1Db), axialRatioFromDb(axialRatio2Db), sameSense, tiltDifferenceDeg);
-  return -10 * Math.log10(Math.max(p, POLARIZATION_EFFICIENCY_FLOOR));
+  return 0 - 10 * Math.log10(Math.max(p, POLARIZATION_EFFICIENCY_FLOOR)); // +0 for a match, not −0
 }

@@ -18,6 +18,7 @@ export type Quantity =
   | 'dBi'
   | 'dBd'
   | 'dBm'
+  | 'dBmPerHz'
   | 'dBHz'
   | 'dBPerK'
   | 'temperatureK'
@@ -38,6 +39,7 @@ export const QUANTITY_UNITS: Record<Quantity, string> = {
   dBi: 'dBi',
   dBd: 'dBd',
   dBm: 'dBm',
+  dBmPerHz: 'dBm/Hz',
   dBHz: 'dB·Hz',
   dBPerK: 'dB/K',
   temperatureK: 'K',
@@ -55,6 +57,7 @@ const SUFFIXES: [RegExp, Quantity][] = [
   [/Dbi$/, 'dBi'],
   [/Dbd$/, 'dBd'],
   [/Dbm$/, 'dBm'],
+  [/DbmPerHz$/, 'dBmPerHz'],
   [/DbHz$/, 'dBHz'],
   [/(Db|_DB)$/, 'dB'],
   [/(Deg|_DEG)$/, 'angleDeg'],
