@@ -39,3 +39,15 @@ export function antennaNoiseTemperatureK(skyTemperatureK: number, groundTemperat
   requireInRange('groundFraction', groundFraction, 0, 1);
   return (1 - groundFraction) * skyTemperatureK + groundFraction * groundTemperatureK;
 }
+
+/**
+ * Share of a reflector antenna's noise pick-up that comes from the ground through spillover:
+ * (1 − η_spill)·towardGroundShare, where towardGroundShare (default ½) is the part of the
+ * spillover that lands on the ground rather than the sky — about half for a dish pointed well
+ * above the horizon (common practice, no source).
+ */
+export function spilloverGroundFraction(spilloverEfficiency: number, towardGroundShare = 0.5): number {
+  requireInRange('spilloverEfficiency', spilloverEfficiency, 0, 1);
+  requireInRange('towardGroundShare', towardGroundShare, 0, 1);
+  return (1 - spilloverEfficiency) * towardGroundShare;
+}
