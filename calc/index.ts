@@ -23,6 +23,7 @@ export * from './reflectorFormulas';
 export * from './array/index';
 export * from './link/index';
 export * from './linkBudgetFormulas';
+export * from './units/index';
 export * from './exposure/powerDensity';
 export * from './exposure/referenceLevels';
 export * from './linkFormulas';

@@ -51,6 +51,11 @@ export const calculators: NavEntry[] = [
     title: 'Link budget, G/T & margin',
     summary: 'The whole link as a budget table: EIRP (also of an active array), path, polarization and pointing losses, system noise temperature, G/T, C/N₀, Eb/N₀, margin and the largest range at a chosen margin.'
   },
+  {
+    path: 'calculators/unit-converter/',
+    title: 'Unit & level converter',
+    summary: 'dB and ratios, dBm and watts, power density and field strength, VSWR and return loss, noise figure and temperature, dBi and dBd, frequency and wavelength, Eb/N₀ and C/N₀.'
+  },
 ];
 
 export const docs: NavEntry[] = [

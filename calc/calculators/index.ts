@@ -13,6 +13,7 @@ import { createEndFireLengthCalculator } from './endFireLength';
 import { createBackplaneSpacingCalculator } from './backplaneSpacing';
 import { createArrayExplorerCalculator } from './arrayExplorer';
 import { createLinkBudgetCalculator } from './linkBudget';
+import { createUnitConverterCalculator } from './unitConverter';
 
 export const calculatorFactories: Record<string, (conventions: TeamConventions) => CalculatorDef<unknown>> = {
   'wavelength-spacing': createWavelengthSpacingCalculator as (c: TeamConventions) => CalculatorDef<unknown>,
@@ -24,4 +25,5 @@ export const calculatorFactories: Record<string, (conventions: TeamConventions) 
   'backplane-spacing': createBackplaneSpacingCalculator as (c: TeamConventions) => CalculatorDef<unknown>,
   'array-explorer': createArrayExplorerCalculator as (c: TeamConventions) => CalculatorDef<unknown>,
   'link-budget': createLinkBudgetCalculator as (c: TeamConventions) => CalculatorDef<unknown>,
+  'unit-converter': createUnitConverterCalculator as (c: TeamConventions) => CalculatorDef<unknown>,
 };

@@ -51,3 +51,10 @@ export function sensitivityDbm(bandwidthHz: number, noiseFigureDb: number, requi
   requireFinite('requiredSnrDb', requiredSnrDb, 'dB');
   return noiseDensityDbmPerHz(REFERENCE_NOISE_TEMPERATURE_K) + 10 * Math.log10(bandwidthHz) + noiseFigureDb + requiredSnrDb;
 }
+
+/** C/N₀ in dB·Hz that gives ebN0ValueDb at a bit rate: Eb/N₀ + 10·log10(R_b). */
+export function carrierToNoiseDensityFromEbN0DbHz(ebN0ValueDb: number, bitRateBitPerS: number): number {
+  requireFinite('ebN0Db', ebN0ValueDb, 'dB');
+  requirePositive('bitRateBitPerS', bitRateBitPerS, 'bit/s');
+  return ebN0ValueDb + 10 * Math.log10(bitRateBitPerS);
+}

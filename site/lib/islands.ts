@@ -13,6 +13,7 @@ import EndFireLength from '../../components/calculators/EndFireLength.svelte';
 import BackplaneSpacing from '../../components/calculators/BackplaneSpacing.svelte';
 import ArrayExplorer from '../../components/calculators/ArrayExplorer.svelte';
 import LinkBudget from '../../components/calculators/LinkBudget.svelte';
+import UnitConverter from '../../components/calculators/UnitConverter.svelte';
 
 /** Props every calculator island accepts. */
 export interface IslandProps {
@@ -32,5 +33,6 @@ export const calculatorIslands: Record<string, Component<IslandProps>> = {
   'backplane-spacing': BackplaneSpacing,
   'array-explorer': ArrayExplorer,
   'link-budget': LinkBudget,
+  'unit-converter': UnitConverter,
 };
 

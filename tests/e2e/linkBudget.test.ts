@@ -99,3 +99,20 @@ describe('link budget in Chromium', () => {
     await closeClean({ outside, errors, context });
   });
 });
+
+describe('unit & level converter in Chromium', () => {
+  it('converts as you type and keeps its state in the URL', async () => {
+    const { page, outside, errors, context } = await openPage(browser);
+    await page.goto(siteUrl('calculators/unit-converter/'));
+    await waitForCalculator(page, 'unit-converter');
+    await typeInto(page, 'unit-converter', 'p', '30 dBm');
+    await expect.poll(() => outputText(page, 'powerW')).toBe('1 W');
+    expect(await outputText(page, 'powerDbw')).toBe('0.00 dBW');
+    await typeInto(page, 'unit-converter', 'vswr', '0.8');
+    await expect.poll(() => page.locator('#unit-converter-vswr-msg').innerText()).toMatch(/Out of range/);
+    await typeInto(page, 'unit-converter', 'vswr', '2');
+    await expect.poll(() => outputText(page, 'returnLossDb')).toBe('9.54 dB');
+    await expect.poll(() => page.url()).toContain('vswr=2');
+    await closeClean({ outside, errors, context });
+  });
+});
