@@ -19,6 +19,7 @@ import { activeArrayEirpW, activeArrayTotalPowerW } from '../link/activeArrayEir
 import { pointingLossDb } from '../reflector/pointing';
 import { farFieldBoundaryM } from '../exposure/powerDensity';
 import { brentRoot } from '../numeric/brentRoot';
+import { diameterForGainM } from '../aperture/apertureGain';
 import { CalcInputError } from '../errors';
 import { warning, type CalcWarning } from '../warnings';
 import { frequencyDefaultText } from './defaultText';
@@ -194,6 +195,15 @@ export function computeLinkBudget(inputs: CalcInputs): CalcResult<LinkBudgetData
     maxRangeM = 10 ** brentRoot(excessAtLog, logMin, logMax, 1e-12);
   }
 
+  // Smallest receive antenna: the margin moves dB for dB with the receive gain (T_sys does not depend on it)
+  const requiredReceiveGainDbi = gr + keptMarginDb - marginDb;
+  let smallestDishM: number | null = null;
+  if (requiredReceiveGainDbi >= -100 && requiredReceiveGainDbi <= 200) {
+    const d = diameterForGainM(requiredReceiveGainDbi, inputs.receiveApertureEfficiency as number, lambda);
+    if (d >= lambda) smallestDishM = d;
+    else warnings.push(warning('dish-below-wavelength', 'note', 'The receive gain that keeps the margin needs an aperture smaller than a wavelength: the aperture relation does not apply, so no dish diameter is given.', ['smallestReceiveDishM']));
+  }
+
   // Geometry
   const fresnelM = midpointFresnelRadiusM(rangeM, f);
   const h1 = inputs.transmitHeightM as number | null;
@@ -270,6 +280,8 @@ export function computeLinkBudget(inputs: CalcInputs): CalcResult<LinkBudgetData
       sensitivityDbm: sensitivity,
       marginDb,
       maxRangeM,
+      requiredReceiveGainDbi,
+      smallestReceiveDishM: smallestDishM,
       fresnelRadiusM: fresnelM,
       radioHorizonM: horizonM,
       farFieldBoundaryM: farFieldM,
@@ -349,6 +361,7 @@ export function createLinkBudgetCalculator(conventions: TeamConventions): Calcul
       { kind: 'number', key: 'rb', name: 'bitRateBitPerS', label: 'Bit rate, bit/s', defaultText: '', min: 0, max: 1e13, minExclusive: true, optional: true, description: 'Optional: bit rate for Eb/N₀, in bit/s (e.g. 2e6).' },
       { kind: 'decibel', key: 'cnreq', name: 'requiredCarrierToNoiseDb', label: 'Required C/N', defaultText: '12 dB', min: -30, max: 100, description: 'C/N the demodulator needs in the noise bandwidth (signal-to-noise ratio).' },
       { kind: 'decibel', key: 'mkeep', name: 'keptMarginDb', label: 'Margin to keep (for the largest range)', defaultText: '6 dB', min: 0, max: 100, description: 'Fade margin the largest-range search keeps above the required C/N.' },
+      { kind: 'number', key: 'etar', name: 'receiveApertureEfficiency', label: 'Receive aperture efficiency η (for the smallest dish)', defaultText: String(conventions.efficiencies.reflectorAperture), min: 0.01, max: 1, description: 'Aperture efficiency assumed when the page turns the receive gain that keeps the margin into a dish diameter D = (λ/π)·√(G/η) (team default from the conventions).' },
       { kind: 'length', key: 'ht', name: 'transmitHeightM', label: 'Transmit antenna height', defaultText: '', min: 0, max: 1e6, optional: true, description: 'Optional: height above the ground, for the radio horizon (with the receive height).' },
       { kind: 'length', key: 'hr', name: 'receiveHeightM', label: 'Receive antenna height', defaultText: '', min: 0, max: 1e6, optional: true, description: 'Optional: height above the ground, for the radio horizon (with the transmit height).' },
       { kind: 'length', key: 'dmax', name: 'largestApertureM', label: 'Largest aperture at either end', defaultText: '', min: 1e-3, max: 1e3, optional: true, wavelengthFrom: 'design', description: 'Optional: the largest antenna dimension of the two, for the far-field check 2D²/λ.' },
@@ -356,6 +369,8 @@ export function createLinkBudgetCalculator(conventions: TeamConventions): Calcul
     outputs: [
       { key: 'marginDb', label: 'Margin over the required C/N', kind: 'decibel', digits: 4 },
       { key: 'maxRangeM', label: 'Largest range keeping the margin to keep', kind: 'length', digits: 4, description: 'Found by Brent root-finding on the margin against range' },
+      { key: 'requiredReceiveGainDbi', label: 'Receive gain that keeps the margin to keep at this range', kind: 'decibel', digits: 4, unit: 'dBi', description: 'The margin changes dB for dB with the receive gain; pointing loss held as entered' },
+      { key: 'smallestReceiveDishM', label: 'Smallest receive dish keeping that margin (at the η entered)', kind: 'length', digits: 3, description: 'D = (λ/π)·√(G/η), the aperture relation of calc/aperture' },
       { key: 'eirpDbw', label: 'EIRP on the beam axis', kind: 'decibel', digits: 4, unit: 'dBW' },
       { key: 'eirpW', label: 'EIRP on the beam axis', kind: 'power', digits: 4 },
       { key: 'eirpEdgeDbw', label: 'EIRP at the scan edge', kind: 'decibel', digits: 4, unit: 'dBW' },
@@ -425,7 +440,7 @@ export function createLinkBudgetCalculator(conventions: TeamConventions): Calcul
       'Polarization: both ellipses are described looking along one propagation direction; a gain in dBic is to the co-polarized circular component, so a linear antenna receiving circular polarization loses 3 dB here, not in its gain.',
       'Noise: the system noise temperature is referred to the antenna terminals by the Friis noise formula: T_sys = T_A + (L − 1)·T_phys + L·T_rx, with T_rx = 290 K·(10^(NF/10) − 1). The antenna temperature is a weighted sum of sky and ground (common practice, no source). Radome and mismatch act on the signal only; a lossy radome’s own noise belongs in the sky temperature.',
       'C/N₀ = P_r − 10·log10(k·T_sys) with k = 1.380649×10⁻²³ J/K exact in the SI (kT₀ = −173.98 dBm/Hz at 290 K). Thermal noise only: no interference, intermodulation or phase noise.',
-      'The largest range keeps the margin you set with every other line unchanged (only the free-space loss changes with range), found by Brent root-finding; atmospheric and rain losses that grow with the path are not rescaled.',
+      'The largest range keeps the margin you set with every other line unchanged (only the free-space loss changes with range), found by Brent root-finding; atmospheric and rain losses that grow with the path are not rescaled. Likewise the smallest receive dish keeps every other line, including the pointing loss as entered (a larger dish has a narrower beam).',
       'Active array: EIRP = N²·P_el·G_el (every element in phase toward the receiver, equal amplitudes), while the total radiated power is N·P_el.',
       'Radio horizon: smooth earth, radius 6371 km times 4/3 (standard refraction). Beyond it, free-space range is not reachable.',
       EXPOSURE_CAUTION,

@@ -24,7 +24,7 @@ function fixtureBudgetInputs(c: FixtureInputs): CalcInputs {
     receiveGainDbi: c.gr, receiveVswr: c.vswrr, receiveRadomeLossDb: c.radr, receiveBeamwidthDeg: c.bwr, receivePointingErrorDeg: c.per,
     skyTemperatureK: c.tsky, groundFraction: c.gfr, groundTemperatureK: c.tgnd, receiveFeederLossDb: c.lfr, feederTemperatureK: c.tphys,
     receiverNoiseFigureDb: c.nf, bandwidthHz: c.bw, bitRateBitPerS: null, requiredCarrierToNoiseDb: c.cnreq, keptMarginDb: c.mkeep,
-    transmitHeightM: null, receiveHeightM: null, largestApertureM: null,
+    receiveApertureEfficiency: 0.6, transmitHeightM: null, receiveHeightM: null, largestApertureM: null,
   };
 }
 

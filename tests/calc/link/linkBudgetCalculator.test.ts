@@ -69,7 +69,8 @@ describe('link-budget calculator', () => {
         const low = computeLinkBudget({ ...base, [name]: a }).values;
         const high = computeLinkBudget({ ...base, [name]: a + extra }).values;
         expect(high.marginDb as number).toBeLessThanOrEqual((low.marginDb as number) + 1e-9);
-        expect(high.maxRangeM as number).toBeLessThanOrEqual((low.maxRangeM as number) * (1 + 1e-9));
+        // no range at all (null) counts as the shortest
+        expect(high.maxRangeM ?? 0).toBeLessThanOrEqual((low.maxRangeM ?? 0) * (1 + 1e-9));
       }),
     );
   });
@@ -153,5 +154,20 @@ describe('link-budget bad input: a message at the field, never NaN', () => {
       ),
       { numRuns: 200 },
     );
+  });
+});
+
+describe('link-budget: the smallest receive antenna that keeps the margin', () => {
+  it('with the receive gain it reports, the margin is exactly the margin to keep; the dish gives that gain at the η entered', async () => {
+    const { apertureGainDbi } = await import('../../../calc/aperture/apertureGain');
+    const inputs = inputsWith({ r: '2000 km', mkeep: '10 dB', etar: '0.55' });
+    const v = computeLinkBudget(inputs).values;
+    expect(computeLinkBudget({ ...inputs, receiveGainDbi: v.requiredReceiveGainDbi }).values.marginDb).toBeCloseTo(10, 9);
+    expect(apertureGainDbi(0.55, v.smallestReceiveDishM as number, 299_792_458 / 10e9)).toBeCloseTo(v.requiredReceiveGainDbi as number, 9);
+  });
+  it('gives no diameter, with a note, when the gain needed is below what a one-wavelength aperture gives', () => {
+    const res = computeLinkBudget(inputsWith({ r: '10 m', mkeep: '0 dB' }));
+    expect(res.values.smallestReceiveDishM).toBeNull();
+    expect(res.warnings.map((w) => w.code)).toContain('dish-below-wavelength');
   });
 });
