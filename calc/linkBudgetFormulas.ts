@@ -110,7 +110,7 @@ export const polarizationMismatchFormula = defineFormula({
     { symbol: '\\Delta\\tau', meaning: 'angle between the major axes of the two ellipses', unit: '°' },
     { symbol: 'L_p', meaning: 'polarization mismatch loss (capped at 60 dB for ideal cross-polarization)', unit: 'dB' },
   ],
-  validity: 'Both polarizations described looking along one propagation direction; plane-wave coupling on the beam axis. Linear: r → ∞; circular: r = ±1.',
+  validity: 'Each sense is the antenna’s own as it transmits (two right-hand antennas match); Δτ is the physical angle between the major axes; plane-wave coupling on the beam axis. Linear: r → ∞; circular: r = ±1.',
   source: 'W. L. Stutzman, Polarization in Electromagnetic Systems, Artech House, 1993; Stutzman & Thiele, Antenna Theory and Design, 3rd ed., Wiley, 2012.',
   argNames: ['axialRatio1Db', 'axialRatio2Db', 'sameSense', 'tiltDifferenceDeg'],
   evaluate: (a) => polarizationMismatchLossDb(a.axialRatio1Db, a.axialRatio2Db, a.sameSense !== 0, a.tiltDifferenceDeg),

@@ -4,9 +4,9 @@
  * Electromagnetic Systems, Artech House, 1993; W. L. Stutzman and G. A. Thiele, Antenna Theory and
  * Design, 3rd ed., Wiley, 2012 (polarization efficiency).
  *
- * Both polarizations are described as seen along the same direction of propagation (the wave
- * arriving, and the receive antenna's own polarization when it transmits toward the other end,
- * turned round), so equal axial ratio, sense and tilt means a match. A circularly polarized gain
+ * Each antenna's sense of rotation is its own, as it transmits (two right-hand circular antennas
+ * facing each other match), and the tilt difference is the physical angle between the two major
+ * axes; so equal axial ratio, sense and tilt means a match. A circularly polarized gain
  * in dBic is the gain to the co-polarized circular component; a linear antenna sees half of it
  * (3 dB: the linear–circular case below).
  */
