@@ -7,6 +7,12 @@ export function freeSpaceWavelengthM(frequencyHz: number): number {
   return SPEED_OF_LIGHT_M_PER_S / frequencyHz;
 }
 
+/** Frequency (Hz) of a free-space wavelength wavelengthM: f = c / λ0. */
+export function freeSpaceFrequencyHz(wavelengthM: number): number {
+  requirePositive('wavelengthM', wavelengthM, 'm');
+  return SPEED_OF_LIGHT_M_PER_S / wavelengthM;
+}
+
 /** Wavelength in a lossless non-magnetic medium, metres: λ = c / (f √εr). */
 export function mediumWavelengthM(frequencyHz: number, relativePermittivity: number): number {
   requirePositive('frequencyHz', frequencyHz, 'Hz');

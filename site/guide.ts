@@ -14,4 +14,5 @@ export const guideSections: NavEntry[] = [
   { path: 'guide/circular-and-y-arrays/', title: 'Circular and Y-shaped arrays', summary: 'Arrays that look the same in every azimuth, and sparse arms that buy resolution cheaply.' },
   { path: 'guide/planar-and-conformal/', title: 'Planar and conformal surface arrays', summary: 'Directivity from area, element counts from the lattice, and arrays that follow a curved surface.' },
   { path: 'guide/sparse-and-distributed/', title: 'Sparse, volumetric and distributed arrays', summary: 'Resolution from extent, directivity from element count, and where the missing power goes.' },
+  { path: 'guide/link-budget/', title: 'The system around the antenna — link budgets and G/T', summary: 'From the dish to the margin: noise temperature and the Friis noise formula, G/T, polarization and mismatch, and one downlink budget line by line.' },
 ];

@@ -46,6 +46,16 @@ export const calculators: NavEntry[] = [
     title: 'Link range & RF exposure',
     summary: 'Friis range or the gain a range needs, free-space loss (ITU-R P.525), EIRP, power density and the distance to an exposure limit.'
   },
+  {
+    path: 'calculators/link-budget/',
+    title: 'Link budget, G/T & margin',
+    summary: 'The whole link as a budget table: EIRP (also of an active array), path, polarization and pointing losses, system noise temperature, G/T, C/N₀, Eb/N₀, margin and the largest range at a chosen margin.'
+  },
+  {
+    path: 'calculators/unit-converter/',
+    title: 'Unit & level converter',
+    summary: 'dB and ratios, dBm and watts, power density and field strength, VSWR and return loss, noise figure and temperature, dBi and dBd, frequency and wavelength, Eb/N₀ and C/N₀.'
+  },
 ];
 
 export const docs: NavEntry[] = [

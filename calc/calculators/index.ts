@@ -12,6 +12,8 @@ import { createArchitectureSizingCalculator } from './architectureSizing';
 import { createEndFireLengthCalculator } from './endFireLength';
 import { createBackplaneSpacingCalculator } from './backplaneSpacing';
 import { createArrayExplorerCalculator } from './arrayExplorer';
+import { createLinkBudgetCalculator } from './linkBudget';
+import { createUnitConverterCalculator } from './unitConverter';
 
 export const calculatorFactories: Record<string, (conventions: TeamConventions) => CalculatorDef<unknown>> = {
   'wavelength-spacing': createWavelengthSpacingCalculator as (c: TeamConventions) => CalculatorDef<unknown>,
@@ -22,4 +24,6 @@ export const calculatorFactories: Record<string, (conventions: TeamConventions) 
   'end-fire-length': createEndFireLengthCalculator as (c: TeamConventions) => CalculatorDef<unknown>,
   'backplane-spacing': createBackplaneSpacingCalculator as (c: TeamConventions) => CalculatorDef<unknown>,
   'array-explorer': createArrayExplorerCalculator as (c: TeamConventions) => CalculatorDef<unknown>,
+  'link-budget': createLinkBudgetCalculator as (c: TeamConventions) => CalculatorDef<unknown>,
+  'unit-converter': createUnitConverterCalculator as (c: TeamConventions) => CalculatorDef<unknown>,
 };

@@ -31,6 +31,9 @@ import { dipoleOverPlaneDirectivity } from '../../calc/backplane/index';
 import { endFireDirectivity, endFireSpacingLimitWavelengths, NBS_YAGI_DESIGNS, yagiGainDbd } from '../../calc/endFire/index';
 import { DIPOLE_DIRECTIVITY_DBI } from '../../calc/constants';
 import { RING_FIRST_SIDELOBE_DB } from '../../calc/sizing/ringCandidates';
+import { noiseDensityDbmPerHz, REFERENCE_NOISE_TEMPERATURE_K } from '../../calc/link/thermalNoise';
+import { computeLinkBudget } from '../../calc/calculators/linkBudget';
+import { budgetMarkdown, budgetRows } from '../../components/calculators/budgetTable';
 
 // ---------- formatting (prose: true minus sign, space as thousands separator) ----------
 
@@ -91,6 +94,9 @@ export const GUIDE_PRESETS = {
   thinned: '?v=2&geo=thinned&lat=rectangular&out=rectangle&nx=24&ny=24&d=0.5lambda&f=10GHz&fill=0.25&seed=7&tap=uniform&el=cosine&nexp=2&th=0deg&ph=0deg',
   harbourSizing: '?v=1&f=9GHz&fhi=10GHz&req=gain&g=32dBi&saz=50deg&sel=0deg&uaz=no&maxsize=1.3m&eta=0.6&etar=0.8&nexp=1.3&margin=0.05&lat=triangular&ge=6dBi',
   balloonSpacing: '?v=1&f=1.68GHz&er=1&scan=30deg&lat=rectangular&d=0.6lambda&w=1m&shape=ellipse',
+  /** The 3.7 m dish of the reflector part as the receive antenna of an 8.2 GHz downlink (its gain, beamwidth and spillover share as the reflector page's link carries them). */
+  xbandDownlink:
+    '?v=1&f=8.2GHz&r=1500km&tx=single&pt=3W&lft=1dB&gt=6dBi&vswrt=1.3&radt=0dB&pet=0deg&atm=0.3dB&rain=1dB&art=2dB&arr=1dB&sense=same&tilt=45deg&gr=48.34dBi&vswrr=1&radr=0dB&bwr=0.65373deg&per=0.1deg&tsky=30&gfr=0.03228&tgnd=290&lfr=0.2dB&tphys=290&nf=0.8dB&bw=60MHz&rb=100e6&cnreq=8dB&mkeep=3dB&dmax=3.7m',
 } as const;
 
 const harbour = memo(() => calculator('wavelength-spacing', GUIDE_PRESETS.harbourSpacing));
@@ -102,6 +108,7 @@ const radioY = memo(() => calculator('array-explorer', GUIDE_PRESETS.radioY));
 const thinned = memo(() => calculator('array-explorer', GUIDE_PRESETS.thinned));
 const sizing = memo(() => calculator('architecture-sizing', GUIDE_PRESETS.harbourSizing));
 const balloon = memo(() => calculator('wavelength-spacing', GUIDE_PRESETS.balloonSpacing));
+const downlink = memo(() => calculator('link-budget', GUIDE_PRESETS.xbandDownlink));
 
 const line16 = (spec: Partial<ArraySpec> = {}): ArraySpec => ({ geometry: { kind: 'linear', count: 16, spacingWavelengths: 0.5 }, ...spec });
 const uniform16 = figures(line16());
@@ -343,7 +350,26 @@ export const GUIDE_NUMBERS = {
   bits5SllDb: () => fixed(need(bits[5]().quantizedPeakSidelobeDb, 'SLL'), 1),
   bitsIdealSllDb: () => fixed(need(bits[3]().peakSidelobeDb, 'SLL'), 1),
   bitsIdealSllRoundDb: () => fixed(need(bits[3]().peakSidelobeDb, 'SLL'), 0),
+  kT0DbmPerHz: () => fixed(noiseDensityDbmPerHz(REFERENCE_NOISE_TEMPERATURE_K), 2),
+  downlinkReceiverK: () => fixed(value(downlink(), 'receiverNoiseTemperatureK'), 0),
+  downlinkAntennaK: () => fixed(value(downlink(), 'antennaNoiseTemperatureK'), 1),
+  downlinkSystemK: () => fixed(value(downlink(), 'systemNoiseTemperatureK'), 0),
+  downlinkGOverTDbPerK: () => fixed(value(downlink(), 'gOverTDbPerK'), 1),
+  downlinkEirpDbw: () => fixed(value(downlink(), 'eirpDbw'), 1),
+  downlinkFsplDb: () => fixed(value(downlink(), 'fsplDb'), 1),
+  downlinkPolarizationDb: () => fixed(value(downlink(), 'polarizationLossDb'), 2),
+  downlinkCn0DbHz: () => fixed(value(downlink(), 'carrierToNoiseDensityDbHz'), 1),
+  downlinkEbN0Db: () => fixed(value(downlink(), 'ebN0Db'), 1),
+  downlinkMarginDb: () => fixed(value(downlink(), 'marginDb'), 1),
+  downlinkMaxRangeKm: () => about(value(downlink(), 'maxRangeM') / 1000, 10),
 } satisfies Record<string, () => string>;
+
+/** The guide's closing budget: the whole downlink budget as the page's "Copy as Markdown" writes it, built at build time. */
+export const downlinkBudgetMarkdown = memo(() => {
+  const def = calculatorFactories['link-budget'](teamConventions);
+  const { inputs } = validateAll(def, decodeState(def, GUIDE_PRESETS.xbandDownlink).texts);
+  return budgetMarkdown(budgetRows(computeLinkBudget(inputs!).data));
+});
 
 export type GuideNumberKey = keyof typeof GUIDE_NUMBERS;
 

@@ -12,6 +12,8 @@ import ArchitectureSizing from '../../components/calculators/ArchitectureSizing.
 import EndFireLength from '../../components/calculators/EndFireLength.svelte';
 import BackplaneSpacing from '../../components/calculators/BackplaneSpacing.svelte';
 import ArrayExplorer from '../../components/calculators/ArrayExplorer.svelte';
+import LinkBudget from '../../components/calculators/LinkBudget.svelte';
+import UnitConverter from '../../components/calculators/UnitConverter.svelte';
 
 /** Props every calculator island accepts. */
 export interface IslandProps {
@@ -30,5 +32,7 @@ export const calculatorIslands: Record<string, Component<IslandProps>> = {
   'end-fire-length': EndFireLength,
   'backplane-spacing': BackplaneSpacing,
   'array-explorer': ArrayExplorer,
+  'link-budget': LinkBudget,
+  'unit-converter': UnitConverter,
 };
 

@@ -6,6 +6,7 @@ import { reflectorCases } from './reflector.cases';
 import { endFireCases } from './endFire.cases';
 import { backplaneCases } from './backplane.cases';
 import { linkExposureCases } from './linkExposure.cases';
+import { linkBudgetCases } from './linkBudget.cases';
 import { scanLossCases } from './scanLoss.cases';
 import { sizingCases } from './sizing.cases';
 
@@ -17,6 +18,7 @@ export const referenceGroups: ReferenceGroup[] = [
   backplaneCases,
   scanLossCases,
   linkExposureCases,
+  linkBudgetCases,
   sizingCases,
   formulaExampleCases,
 ];

@@ -17,6 +17,11 @@ export type Quantity =
   | 'dB'
   | 'dBi'
   | 'dBd'
+  | 'dBm'
+  | 'dBmPerHz'
+  | 'dBHz'
+  | 'dBPerK'
+  | 'temperatureK'
   | 'powerW'
   | 'powerDensityWPerM2'
   | 'percent'
@@ -33,6 +38,11 @@ export const QUANTITY_UNITS: Record<Quantity, string> = {
   dB: 'dB',
   dBi: 'dBi',
   dBd: 'dBd',
+  dBm: 'dBm',
+  dBmPerHz: 'dBm/Hz',
+  dBHz: 'dB·Hz',
+  dBPerK: 'dB/K',
+  temperatureK: 'K',
   powerW: 'W',
   powerDensityWPerM2: 'W/m²',
   percent: '%',
@@ -43,8 +53,12 @@ export const QUANTITY_UNITS: Record<Quantity, string> = {
 /** Unit suffixes of calc/ names, most specific first; a name without one is a pure number. */
 const SUFFIXES: [RegExp, Quantity][] = [
   [/WPerM2$/, 'powerDensityWPerM2'],
+  [/DbPerK$/, 'dBPerK'],
   [/Dbi$/, 'dBi'],
   [/Dbd$/, 'dBd'],
+  [/Dbm$/, 'dBm'],
+  [/DbmPerHz$/, 'dBmPerHz'],
+  [/DbHz$/, 'dBHz'],
   [/(Db|_DB)$/, 'dB'],
   [/(Deg|_DEG)$/, 'angleDeg'],
   [/Rad$/, 'angleRad'],
@@ -54,6 +68,7 @@ const SUFFIXES: [RegExp, Quantity][] = [
   [/(Count|^count)$/, 'count'],
   [/Watts$/, 'powerW'],
   [/[a-z0-9]M$/, 'lengthM'],
+  [/[a-z0-9]K$/, 'temperatureK'],
 ];
 
 /** The quantity a calc/ name declares by its unit suffix (`onsetDeg` → angleDeg); 'ratio' without one. */
@@ -67,6 +82,9 @@ export function hasUnitSuffix(name: string): boolean {
   return SUFFIXES.some(([pattern]) => pattern.test(name));
 }
 
+/** Decibel outputs by display unit; any other unit (or none) is a plain dB. */
+const DECIBEL_UNITS: Record<string, Quantity> = { dBi: 'dBi', dBd: 'dBd', dBm: 'dBm', 'dB·Hz': 'dBHz', 'dB/K': 'dBPerK' };
+
 /** The quantity a calculator output holds, from its OutputSpec kind and display unit. */
 export function quantityOfOutput(spec: Pick<OutputSpec, 'kind' | 'unit'>): Quantity {
   switch (spec.kind) {
@@ -79,7 +97,7 @@ export function quantityOfOutput(spec: Pick<OutputSpec, 'kind' | 'unit'>): Quant
     case 'levelBelowPeak':
       return 'dB';
     case 'decibel':
-      return spec.unit === 'dBi' ? 'dBi' : spec.unit === 'dBd' ? 'dBd' : 'dB';
+      return DECIBEL_UNITS[spec.unit ?? ''] ?? 'dB';
     case 'power':
       return 'powerW';
     case 'powerDensity':
@@ -90,6 +108,6 @@ export function quantityOfOutput(spec: Pick<OutputSpec, 'kind' | 'unit'>): Quant
       return 'count';
     case 'ratio':
     case 'number':
-      return spec.unit === 'λ' || spec.unit === 'λ₀' ? 'lengthWavelengths' : 'ratio';
+      return spec.unit === 'λ' || spec.unit === 'λ₀' ? 'lengthWavelengths' : spec.unit === 'K' ? 'temperatureK' : 'ratio';
   }
 }
