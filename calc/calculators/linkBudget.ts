@@ -24,7 +24,8 @@ import { CalcInputError } from '../errors';
 import { warning, type CalcWarning } from '../warnings';
 import { frequencyDefaultText } from './defaultText';
 import { EXPOSURE_CAUTION } from './rangeExposure';
-import { farFieldBoundaryFormula, freeSpacePathLossFormula, p525LossFormula } from '../linkFormulas';
+import { freeSpacePathLossFormula, p525LossFormula } from '../linkFormulas';
+import { farFieldDistanceFormula } from '../aperture/formulas';
 import {
   carrierToNoiseDensityFormula,
   fresnelRadiusFormula,
@@ -431,7 +432,7 @@ export function createLinkBudgetCalculator(conventions: TeamConventions): Calcul
         output: 'radioHorizonM',
         args: (i) => (i.transmitHeightM === null || i.receiveHeightM === null ? null : { heightTransmitM: i.transmitHeightM as number, heightReceiveM: i.receiveHeightM as number }),
       },
-      { formula: farFieldBoundaryFormula, output: 'farFieldBoundaryM', args: (i) => (i.largestApertureM === null ? null : { apertureDiameterM: i.largestApertureM as number, frequencyHz: i.frequencyHz as number }) },
+      { formula: farFieldDistanceFormula, output: 'farFieldBoundaryM', args: (i) => (i.largestApertureM === null ? null : { apertureDiameterM: i.largestApertureM as number, frequencyHz: i.frequencyHz as number }) },
     ],
     assumptions: [
       'Free-space propagation on a clear line of sight (keep about 60 % of the first Fresnel zone clear; common practice); atmospheric gases and rain enter as the values you give — take them from Recommendations ITU-R P.676 (gases), P.838 with P.530 (rain, terrestrial) or P.618 (earth–space) for your path, climate and availability.',

@@ -36,10 +36,11 @@ describe('VSWR ↔ |Γ| ↔ return loss ↔ mismatch loss', () => {
       }),
     );
   });
-  it('a worse match never lowers the mismatch loss (property)', () => {
+  it('a worse match never lowers the mismatch loss (property, up to floating-point rounding of 1e-12 relative)', () => {
     fc.assert(
       fc.property(fc.double({ min: 1, max: 100, noNaN: true }), fc.double({ min: 0, max: 100, noNaN: true }), (s, ds) => {
-        expect(mismatchLossFromVswrDb(s + ds)).toBeGreaterThanOrEqual(mismatchLossFromVswrDb(s));
+        const before = mismatchLossFromVswrDb(s);
+        expect(mismatchLossFromVswrDb(s + ds)).toBeGreaterThanOrEqual(before - 1e-12 * Math.abs(before));
       }),
     );
   });
