@@ -2,6 +2,7 @@ import FFT from 'fft.js';
 import { CalcInputError } from '../errors';
 import { compositeGaussLegendre } from '../numeric/gaussLegendre';
 import { isIsotropic } from './elementPattern';
+import { forwardCosineKernel, forwardCosineKernelPoints } from './forwardCosineKernel';
 import { arrayDiameterWavelengths } from './geometry';
 import { sinc } from './linearDirectivity';
 import { patternPowerAtDirections } from './patternPower';
@@ -25,18 +26,56 @@ export interface DirectivityResult {
 
 const TWO_PI = 2 * Math.PI;
 
-/** Σ_m Σ_n w_m w_n* sinc(2π|r_m − r_n|) (positions in λ): 1/(4π) × ∫|AF|² dΩ for isotropic elements. */
-function pairSum(model: ArrayModel): { value: number; terms: number } {
+/** Pair kernel: the sphere average of e^{j2π Δr·û}·E²(û) for a separation of `distance` λ. */
+type PairKernel = (distanceWavelengths: number) => number;
+
+const isotropicKernel: PairKernel = (distance) => sinc(TWO_PI * distance);
+
+/**
+ * The pair kernel of the model's element, or null when the pair sum does not apply: isotropic
+ * elements anywhere (sinc), or the forward cosⁿθ element with every element in the x–y plane and
+ * no ground plane (forwardCosineKernel, cached per distance).
+ */
+function pairKernel(model: ArrayModel): PairKernel | null {
+  if (isIsotropic(model.element)) return isotropicKernel;
+  const element = model.element;
+  if (element.kind !== 'cosine' || element.groundPlaneHeightWavelengths !== undefined) return null;
+  if (!model.positionsWavelengths.z.every((value) => value === 0)) return null;
+  const cache = new Map<number, number>();
+  return (distance) => {
+    const key = Math.round(distance * 1e9) / 1e9;
+    let value = cache.get(key);
+    if (value === undefined) { value = forwardCosineKernel(key, element.powerExponent); cache.set(key, value); }
+    return value;
+  };
+}
+
+/**
+ * Cost of the exact pair sum in direct-summation units (kernel evaluations × quadrature points
+ * for the cosⁿθ kernel), or null when it does not apply to this model.
+ */
+export function pairSumWork(model: ArrayModel): number | null {
+  const count = model.weights.re.length;
+  if (!model.lattice && count > MAX_PAIR_SUM_ELEMENTS) return null;
+  if (isIsotropic(model.element)) return model.lattice ? 4 * count : (count * count) / 2;
+  if (!pairKernel(model)) return null;
+  const distinct = model.lattice ? model.lattice.columns * model.lattice.rows : (count * count) / 2;
+  return (model.lattice ? 4 * count : (count * count) / 2) + distinct * forwardCosineKernelPoints(arrayDiameterWavelengths(model.positionsWavelengths)) * 3;
+}
+
+/** Σ_m Σ_n w_m w_n* K(|r_m − r_n|) (positions in λ): 1/(4π) × ∫|AF|²E² dΩ, K = sinc(2πr) for isotropic elements. */
+function pairSum(model: ArrayModel, kernel: PairKernel): { value: number; terms: number } {
   const { x, y, z } = model.positionsWavelengths;
   const { re, im } = model.weights;
   const count = re.length;
   let total = 0;
+  const self = kernel(0);
   for (let m = 0; m < count; m++) {
-    total += re[m] * re[m] + im[m] * im[m];
+    total += (re[m] * re[m] + im[m] * im[m]) * self;
     for (let n = m + 1; n < count; n++) {
       const dx = x[m] - x[n], dy = y[m] - y[n], dz = z[m] - z[n];
       const correlation = re[m] * re[n] + im[m] * im[n]; // Re(w_m w_n*)
-      total += 2 * correlation * sinc(TWO_PI * Math.sqrt(dx * dx + dy * dy + dz * dz));
+      total += 2 * correlation * kernel(Math.sqrt(dx * dx + dy * dy + dz * dz));
     }
   }
   return { value: total, terms: (count * (count + 1)) / 2 };
@@ -48,8 +87,8 @@ function nextPowerOfTwo(n: number): number {
   return p;
 }
 
-/** The same pair sum on a lattice: Σ_Δ R(Δ) sinc(2π|Δr|), with the weight autocorrelation R by 2-D FFT (fft.js). */
-function latticePairSum(model: ArrayModel): { value: number; terms: number } {
+/** The same pair sum on a lattice: Σ_Δ R(Δ) K(|Δr|), with the weight autocorrelation R by 2-D FFT (fft.js). */
+function latticePairSum(model: ArrayModel, kernel: PairKernel): { value: number; terms: number } {
   const lattice = model.lattice!;
   const px = nextPowerOfTwo(2 * lattice.columns - 1);
   const py = lattice.rows === 1 ? 1 : nextPowerOfTwo(2 * lattice.rows - 1);
@@ -93,7 +132,7 @@ function latticePairSum(model: ArrayModel): { value: number; terms: number } {
       const dc = c < px / 2 ? c : c - px;
       if (Math.abs(dc) >= lattice.columns) continue;
       const distance = Math.hypot(dc * lattice.pitchXWavelengths, dr * lattice.pitchYWavelengths);
-      total += grid[2 * (r * px + c)] * sinc(TWO_PI * distance);
+      total += grid[2 * (r * px + c)] * kernel(distance);
     }
   }
   return { value: total, terms: px * py };
@@ -143,7 +182,7 @@ function integratePower(model: ArrayModel, samplesPerWavelength: number): { inte
 export interface DirectivityOptions {
   /** Direction, degrees (default the model's beam direction). */
   direction?: DirectionDeg;
-  /** 'closedForm' (isotropic elements only), 'quadrature', or automatic (default: closed form when the elements are isotropic). */
+  /** 'closedForm' (isotropic elements, or forward cosⁿθ elements in the x–y plane without a ground plane), 'quadrature', or automatic (default: closed form where it applies). */
   method?: DirectivityMethod;
   /** Quadrature panels per wavelength of array size (default 2.5; each panel has 16 Gauss–Legendre nodes). */
   panelsPerWavelength?: number;
@@ -152,22 +191,23 @@ export interface DirectivityOptions {
 /**
  * Directivity D = 4π·P(û)/∫P dΩ of the total pattern (element × array factor) toward a direction
  * (IEEE Std 145 definition). Isotropic elements: exact pair sum Σ w_m w_n* sin(kr_mn)/(kr_mn)
- * (by FFT autocorrelation on lattices). Otherwise: Gauss–Legendre quadrature over the sphere
+ * (by FFT autocorrelation on lattices); forward cosⁿθ elements in the x–y plane: the same sum
+ * with the kernel of forwardCosineKernel.ts. Otherwise: Gauss–Legendre quadrature over the sphere
  * with the sin θ weight and panel counts scaled by the array's electrical size.
  */
 export function directivity(model: ArrayModel, options: DirectivityOptions = {}): DirectivityResult {
   const direction = options.direction ?? model.beam;
-  const isotropic = isIsotropic(model.element);
-  const method = options.method ?? (isotropic ? 'closedForm' : 'quadrature');
-  if (method === 'closedForm' && !isotropic) {
-    throw new CalcInputError('method', 'expected isotropic elements without a ground plane for the closed form; use quadrature');
+  const kernel = pairKernel(model);
+  const method = options.method ?? (kernel ? 'closedForm' : 'quadrature');
+  if (method === 'closedForm' && !kernel) {
+    throw new CalcInputError('method', 'expected isotropic elements, or forward cosⁿθ elements in the x–y plane, without a ground plane for the closed form; use quadrature');
   }
   const peak = peakPower(model, direction);
   let average: number;
   let evaluations: number;
   const count = model.weights.re.length;
   if (method === 'closedForm' && (model.lattice || count <= MAX_PAIR_SUM_ELEMENTS)) {
-    const sum = model.lattice ? latticePairSum(model) : pairSum(model);
+    const sum = model.lattice ? latticePairSum(model, kernel!) : pairSum(model, kernel!);
     average = sum.value;
     evaluations = sum.terms;
   } else {

@@ -30,7 +30,7 @@ import {
 } from '../array/index';
 import { explorerArray, inputsKey, sidelobeDepthDb, type ExplorerGeometry } from '../explorer/explorerInputs';
 import { explorerQueryV1toV2 } from '../explorer/explorerLinkMigration';
-import { cutSamples, directivityNeedsQuadrature, MAX_QUADRATURE_WORK, patternWork, quadratureWork, SYNC_BUDGET_EVALUATIONS } from '../explorer/workEstimate';
+import { cutSamples, directivityNeedsQuadrature, MAX_QUADRATURE_WORK, pairSumFitsSync, patternWork, quadratureWork, SYNC_BUDGET_EVALUATIONS } from '../explorer/workEstimate';
 import { elementNullWarning, peakOffSteeringWarning, withoutBeamFigures } from '../explorer/beamValidity';
 import { highestGratingLobeDb, levelText, planePeakPower } from '../explorer/gratingLobeLevel';
 import { taylorNbarWarning } from '../array/taylorNbar';
@@ -98,7 +98,7 @@ export function computeArrayExplorer(inputs: CalcInputs, mode: ExplorerMode = 'c
   const doPattern = mode === 'complete' || patternWork(model) <= SYNC_BUDGET_EVALUATIONS;
   const quadrature = directivityNeedsQuadrature(model);
   const quadratureTooCostly = quadrature && quadratureWork(model) > MAX_QUADRATURE_WORK;
-  const doDirectivity = !quadratureTooCostly && (mode === 'complete' || !quadrature);
+  const doDirectivity = !quadratureTooCostly && (mode === 'complete' || pairSumFitsSync(model));
 
   let cut: ExplorerCut | null = null;
   let theta: PlaneMetrics | null = null;
@@ -121,11 +121,11 @@ export function computeArrayExplorer(inputs: CalcInputs, mode: ExplorerMode = 'c
   let directivityDbi: number | null = null;
   if (doDirectivity) directivityDbi = directivity(model).directivityDbi;
   else if (quadratureTooCostly) {
-    warnings.push(warning('directivity-too-costly', 'caution', 'With this element pattern and array size, integrating the directivity over the sphere would take minutes, so it is not computed. Use isotropic elements (exact closed form) and add the element pattern\'s own directivity gain by hand, or a smaller array.', ['directivityDbi']));
+    warnings.push(warning('directivity-too-costly', 'caution', 'With this element pattern and array size, integrating the directivity over the sphere would take minutes, so it is not computed. Use isotropic elements or a cosⁿθ element without a ground plane (both have an exact pair sum), or a smaller array.', ['directivityDbi']));
   } else pending.push('directivity');
 
   if (pending.length > 0) {
-    const parts = [pending.includes('pattern') ? 'the pattern cut, beamwidths and sidelobe level' : '', pending.includes('directivity') ? 'the directivity (integrated over the sphere because of the element pattern)' : ''].filter(Boolean).join(' and ');
+    const parts = [pending.includes('pattern') ? 'the pattern cut, beamwidths and sidelobe level' : '', pending.includes('directivity') ? (quadrature ? 'the directivity (integrated over the sphere because of the element pattern)' : 'the directivity (an exact pair sum, long for this many elements)') : ''].filter(Boolean).join(' and ');
     warnings.push(warning('computing-in-background', 'note', `For this array ${parts} are computed in the background; they appear here when ready.`, []));
   }
 

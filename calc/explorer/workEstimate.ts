@@ -4,7 +4,7 @@
  * background worker. Calibrated on the engine's own timings: about 10–30 ns per evaluation in
  * Chromium and Node (see bench/ and DEVELOPERS.md).
  */
-import { arrayDiameterWavelengths, isIsotropic, type ArrayModel } from '../array/index';
+import { arrayDiameterWavelengths, isIsotropic, pairSumWork, type ArrayModel } from '../array/index';
 
 /** Evaluations allowed on the main thread for the cut and the beam metrics together (≈ 30–60 ms). */
 export const SYNC_BUDGET_EVALUATIONS = 3e6;
@@ -42,9 +42,19 @@ export function uvMapWork(model: ArrayModel, count: number): number {
   return count * count * (Math.PI / 4) * evaluationsPerDirection(model);
 }
 
-/** True when directivity needs quadrature over the sphere (non-isotropic element or ground plane): always background work. */
+/**
+ * True when directivity needs quadrature over the sphere (an element pattern or ground plane with
+ * no exact pair sum): always background work. Isotropic elements, and forward cosⁿθ elements in
+ * the x–y plane without a ground plane, have an exact pair sum instead.
+ */
 export function directivityNeedsQuadrature(model: ArrayModel): boolean {
-  return !isIsotropic(model.element);
+  return pairSumWork(model) === null;
+}
+
+/** True when the exact pair sum is cheap enough for the main thread (isotropic sums always are: FFT or sinc only). */
+export function pairSumFitsSync(model: ArrayModel): boolean {
+  const work = pairSumWork(model);
+  return work !== null && (isIsotropic(model.element) || work <= SYNC_BUDGET_EVALUATIONS);
 }
 
 /** Largest quadrature the explorer starts (direct-summation units, ≈ 10 s in a worker on an idle core). */

@@ -14,7 +14,7 @@ describe('directivity(model) of a large broadside planar array at λ/2 (A = N·(
   const aperture = 4 * Math.PI * count * count * 0.25;
   it('with a forward element of power pattern cos²θ (field cos θ) approaches 4πA/λ² within 0.1 dB', () => {
     const d = directivity(planar(count, { kind: 'cosine', powerExponent: 2 }));
-    expect(d.method).toBe('quadrature');
+    expect(d.method).toBe('closedForm'); // exact pair sum with the forward cosⁿθ kernel (flat array, no ground plane)
     expect(Math.abs(d.directivityDbi - db(aperture))).toBeLessThan(0.1);
   });
   it('over a ground plane at λ/4 approaches 4πA/λ² within 0.1 dB', () => {
@@ -37,8 +37,9 @@ describe('directivity(model) of a large broadside planar array at λ/2 (A = N·(
     const model = buildArrayModel({ geometry: { kind: 'random', count: 40, extentXWavelengths: 4, extentYWavelengths: 3, extentZWavelengths: 2, seed: 7 }, steering: { thetaDeg: 50, phiDeg: 200 } });
     expect(Math.abs(directivity(model).directivityDbi - directivity(model, { method: 'quadrature' }).directivityDbi)).toBeLessThan(0.01);
   });
-  it('refuses the closed form for a non-isotropic element', () => {
-    expect(() => directivity(planar(4, { kind: 'cosine', powerExponent: 2 }), { method: 'closedForm' })).toThrow(CalcInputError);
+  it('refuses the closed form for an element with no exact pair sum (a dipole, or any element over a ground plane)', () => {
+    expect(() => directivity(planar(4, { kind: 'halfWaveDipole', axis: 'x' }), { method: 'closedForm' })).toThrow(CalcInputError);
+    expect(() => directivity(planar(4, { kind: 'cosine', powerExponent: 2, groundPlaneHeightWavelengths: 0.25 }), { method: 'closedForm' })).toThrow(CalcInputError);
   });
 });
 

@@ -34,12 +34,14 @@ describe('explorer links of schema version 1 open as the same antenna in version
     for (const query of pinned) expect(VERSION_1_RESULTS[query], query).toBeDefined();
   });
   for (const query of pinned) {
-    it(`same directivity, HPBW and sidelobe level as version 1 (to 1e-9), same beam offset to 1e-6°: ${query}`, () => {
+    it(`same directivity (to 1e-8 dB), HPBW and sidelobe level (to 1e-9) as version 1, same beam offset to 1e-6°: ${query}`, () => {
       const { decoded, inputs } = openLink(query);
       expect(decoded.notices.filter((n) => !/upgraded to version 2/.test(n))).toEqual([]);
       const r = computeArrayExplorer(inputs, 'complete');
       const [directivityDbi, hpbwDeg, sidelobeDb, offsetDeg] = VERSION_1_RESULTS[query];
-      expect(r.values.directivityDbi).toBeCloseTo(directivityDbi, 9);
+      // Version 1 integrated the directivity of cosine elements over the sphere (accurate to ~1e-9 dB);
+      // flat arrays of them now use the exact pair sum, so the same antenna agrees to 1e-8 dB.
+      expect(Math.abs((r.values.directivityDbi as number) - directivityDbi)).toBeLessThan(1e-8);
       expect(r.values.hpbwScanDeg).toBeCloseTo(hpbwDeg, 9);
       expect(r.values.sidelobeDb).toBeCloseTo(sidelobeDb, 9);
       // The version-1 offsets were found by golden-section search, which left up to ~2e-7° of
