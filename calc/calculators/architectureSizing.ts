@@ -162,7 +162,7 @@ export function createArchitectureSizingCalculator(conventions: TeamConventions)
       { key: 'cornerScanDeg', label: 'Coverage corner from the face normal, acos(cos az · cos el)', kind: 'angle', digits: 3 },
       { key: 'reflectorDiameterM', label: 'Reflector diameter', kind: 'length', digits: 3 },
       { key: 'endFireLengthM', label: 'Yagi–Uda boom length', kind: 'length', digits: 2, description: 'From a transcribed table: two figures' },
-      { key: 'endFireGainDbi', label: 'Yagi–Uda gain (published table)', kind: 'number', digits: 2, unit: 'dBi', description: 'Transcribed table value (from memory): two figures' },
+      { key: 'endFireGainDbi', label: 'Yagi–Uda gain (published table)', kind: 'decibel', digits: 3, decimals: 1, unit: 'dBi', description: 'Transcribed table value (from memory): to 0.1 dB' },
       { key: 'endFireHpbwDeg', label: 'Yagi–Uda beamwidth, √(41 253/G)', kind: 'angle', digits: 2, description: 'Beam-area estimate: two figures' },
       { key: 'linearLengthM', label: 'Linear array length', kind: 'length', digits: 3 },
       { key: 'linearElements', label: 'Linear array elements', kind: 'count', digits: 0 },
