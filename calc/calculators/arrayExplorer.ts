@@ -248,7 +248,7 @@ export function createArrayExplorerCalculator(conventions: TeamConventions, opti
       { key: 'spacingWavelengths', label: 'Element spacing', kind: 'ratio', digits: 4, unit: 'λ₀' },
       { key: 'ringRadiusM', label: 'Ring radius', kind: 'length', digits: 4 },
       { key: 'sizeWavelengths', label: 'Largest element-to-element distance', kind: 'ratio', digits: 4, unit: 'λ₀' },
-      { key: 'directivityDbi', label: 'Directivity toward (θ₀, φ₀): array factor × element pattern, no losses', kind: 'decibel', digits: 4, unit: 'dBi', description: 'Directivity (IEEE Std 145) of the total pattern, array factor times the chosen element pattern; no efficiency or mismatch, so not gain. Exact closed form for isotropic elements; integration over the sphere otherwise' },
+      { key: 'directivityDbi', label: 'Directivity toward (θ₀, φ₀): array factor × element pattern, no losses', kind: 'decibel', digits: 4, unit: 'dBi', description: 'Directivity (IEEE Std 145) of the total pattern, array factor times the chosen element pattern; no efficiency or mismatch, so not gain. Exact pair sum for isotropic elements and for cosⁿθ elements in the x–y plane without a ground plane; integration over the sphere otherwise' },
       { key: 'filledApertureDirectivityDbi', label: 'Filled-aperture directivity 4πA·cos θ₀/λ² (planar)', kind: 'decibel', digits: 4, unit: 'dBi', description: 'A = elements × lattice cell: what a large uniformly excited planar array with a forward element reaches; the directivity above differs by the taper efficiency, edge effects and, for isotropic elements, the ≈ 3 dB mirror beam' },
       { key: 'hpbwScanDeg', label: 'HPBW, scan plane (φ = φ₀)', kind: 'angle', digits: 4, description: 'Between the −3 dB points found by root-finding' },
       { key: 'hpbwCrossDeg', label: 'HPBW, orthogonal plane', kind: 'angle', digits: 4 },
@@ -272,7 +272,7 @@ export function createArrayExplorerCalculator(conventions: TeamConventions, opti
     ],
     assumptions: [
       'Free-space array factor times one element pattern: mutual coupling, edge effects and the embedded element pattern are not modelled.',
-      'Directivity follows the IEEE Std 145 definition (no losses, no mismatch: it is not gain or realized gain); with isotropic elements it is the exact pair sum, otherwise Gauss–Legendre integration over the sphere.',
+      'Directivity follows the IEEE Std 145 definition (no losses, no mismatch: it is not gain or realized gain); with isotropic elements, and with cosⁿθ elements in the x–y plane and no ground plane, it is an exact pair sum (the cosⁿθ kernel by Bessel J0), otherwise Gauss–Legendre integration over the sphere.',
       'The cosine element is named by its power pattern cosⁿθ (n from the team conventions by default), as on the scan-loss page; a field pattern cosᵐθ is n = 2m.',
       'An x–y array of isotropic elements radiates a mirror beam behind it, so its directivity is about 3 dB below 4πA/λ²; a forward element pattern or a ground plane removes it.',
       'Beamwidths and sidelobe levels are measured in the two principal planes through the beam, sidelobes in the forward half space (z ≥ 0).',
