@@ -26,7 +26,7 @@ export const calculatorCautions: Record<string, string> = {
   'array-explorer': `${RF_EXPOSURE_CAUTION} ${WORK_AT_HEIGHT_CAUTION} ${DEFER}`,
   'backplane-spacing': `${RF_EXPOSURE_CAUTION} ${WORK_AT_HEIGHT_CAUTION} ${DEFER}`,
   'end-fire-length': `Yagi–Uda antennas and stacked bays go on masts and towers. ${WORK_AT_HEIGHT_CAUTION} ${RF_EXPOSURE_CAUTION} ${DEFER}`,
-  'front-fed-reflector': `A high-gain transmitting dish concentrates RF power along its beam, most strongly in the near field in front of the aperture: never stand in front of an energised dish. ${RF_EXPOSURE_CAUTION} ${SUN_CAUTION} ${WORK_AT_HEIGHT_CAUTION} ${DEFER}`,
+  'front-fed-reflector': `A high-gain transmitting dish concentrates RF power along its beam, most strongly in the near field in front of the aperture. Never stand in front of an energised dish. ${RF_EXPOSURE_CAUTION} ${SUN_CAUTION} ${WORK_AT_HEIGHT_CAUTION} ${DEFER}`,
   'range-exposure': `These are simplified estimates. ${RF_EXPOSURE_CAUTION} ${SUN_CAUTION} ${DEFER}`,
   'link-budget': `The transmit side of a link budget is a transmitter: the Link range & RF exposure page (linked under the budget table, with this EIRP) estimates how close to the antenna the power density exceeds a limit. ${RF_EXPOSURE_CAUTION} ${DEFER}`,
   'unit-converter': `Power densities and field strengths converted here bear on exposure limits. ${RF_EXPOSURE_CAUTION} ${DEFER}`,
