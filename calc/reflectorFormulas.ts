@@ -7,13 +7,12 @@ import { defineFormula } from './formula';
 import { degToRad, radToDeg } from './angle';
 import { powerRatioToDb } from './decibel';
 import { freeSpaceWavelengthM } from './wavelength';
+import { apertureGainDbi, farFieldDistanceM } from './aperture/index';
 import {
-  apertureGainDbi,
   blockageEfficiency,
   centralBlockedFraction,
   dishDepthM,
   edgeTaperDb,
-  farFieldDistanceM,
   feedAngleAtApertureRadiusRad,
   feedOffsetAngleRad,
   illuminationEfficiencies,

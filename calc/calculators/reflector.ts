@@ -14,18 +14,15 @@ import { SPEED_OF_LIGHT_M_PER_S } from '../constants';
 import { freeSpaceWavelengthM } from '../wavelength';
 import { warning, type CalcWarning } from '../warnings';
 import { frequencyDefaultText } from './defaultText';
-import { circularApertureGain } from '../aperture/apertureGain';
+import { apertureGainDbi, circularApertureGain, diameterForGainM, farFieldDistanceM } from '../aperture/index';
 import {
   apertureField,
-  apertureGainDbi,
   beamFigures,
   blockageEfficiency,
   centralBlockedFraction,
-  diameterForGainM,
   dishDepthM,
   displacedFeedBeam,
   edgeTaperDb,
-  farFieldDistanceM,
   feedAngleAtApertureRadiusRad,
   feedEdgeLevelDb,
   feedOffsetAngleRad,

@@ -1,12 +1,9 @@
 /**
- * Gain of a circular aperture, G = η (πD/λ)², and its inverse for the diameter: the relation lives
- * in calc/aperture/apertureGain.ts and is re-exported here for the reflector's callers; this file
- * adds the diameter solve for efficiencies that depend on D.
+ * The reflector's diameter solve for efficiencies that depend on D (a fixed-size central blockage).
+ * The aperture relation G = η (πD/λ)² itself and its fixed-efficiency inverse live in calc/aperture/.
  */
 import { requireInRange, requirePositive, CalcInputError } from '../errors';
 import { brentRoot } from '../numeric/brentRoot';
-
-export { apertureGainDbi, diameterForGainM } from '../aperture/apertureGain';
 
 /**
  * Diameter (m) at which gainOfDiameter(D) (dBi, increasing in D) reaches the target, by Brent's

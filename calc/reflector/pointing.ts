@@ -24,5 +24,3 @@ export function pointingErrorForLossDeg(lossDb: number, hpbwDeg: number): number
   return hpbwDeg * Math.sqrt(lossDb / GAUSSIAN_POINTING_COEFFICIENT);
 }
 
-/** The far-field distance 2D²/λ lives in calc/aperture/farFieldDistance.ts; re-exported for the reflector's callers. */
-export { farFieldDistanceM } from '../aperture/farFieldDistance';

@@ -1,5 +1,5 @@
 import { computeReflector } from '../calculators/reflector';
-import { diameterForGainM, apertureGainDbi } from '../reflector/gain';
+import { diameterForGainM, apertureGainDbi } from '../aperture/index';
 import { dishDepthM, focalLengthM } from '../reflector/geometry';
 import { brentRoot } from '../numeric/brentRoot';
 import { freeSpaceWavelengthM } from '../wavelength';

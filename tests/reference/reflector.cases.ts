@@ -1,7 +1,7 @@
 import type { ReferenceGroup } from './referenceCase';
 import { freeSpaceWavelengthM } from '../../calc/wavelength';
 import { ruzeEfficiency } from '../../calc/reflector/ruze';
-import { apertureGainDbi } from '../../calc/reflector/gain';
+import { apertureGainDbi } from '../../calc/aperture/index';
 import { beamFigures, tabulateAperture } from '../../calc/reflector/aperturePattern';
 import { illuminationEfficiencies, optimumIllumination } from '../../calc/reflector/efficiency';
 import { rimHalfAngleRad } from '../../calc/reflector/geometry';

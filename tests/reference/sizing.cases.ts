@@ -1,5 +1,5 @@
 import type { ReferenceGroup } from './referenceCase';
-import { diameterForGainM } from '../../calc/reflector/gain';
+import { diameterForGainM } from '../../calc/aperture/index';
 import { freeSpaceWavelengthM } from '../../calc/wavelength';
 import { RING_FIRST_SIDELOBE_DB } from '../../calc/sizing/ringCandidates';
 import { elementBeamwidthDeg } from '../../calc/sizing/lineCandidate';

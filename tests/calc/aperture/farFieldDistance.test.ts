@@ -1,6 +1,8 @@
 import { describe, expect, it } from 'vitest';
 import { farFieldDistanceM } from '../../../calc/aperture/farFieldDistance';
-import { farFieldDistanceM as reflectorFarFieldDistanceM } from '../../../calc/reflector/pointing';
+import { computeReflector, createReflectorCalculator } from '../../../calc/calculators/reflector';
+import { defaultTexts, validateAll } from '../../../components/frame/calculatorModel';
+import { teamConventions } from '../../../site/conventions';
 import { farFieldBoundaryM } from '../../../calc/exposure/powerDensity';
 import { freeSpaceWavelengthM } from '../../../calc/wavelength';
 import { CalcInputError } from '../../../calc/errors';
@@ -16,7 +18,9 @@ describe('farFieldDistanceM(D, λ) = 2D²/λ (IEEE Std 149-2021, IEEE Recommende
     expect((Math.sqrt(r * r + (d / 2) ** 2) - r) / l).toBeCloseTo(1 / 16, 4);
   });
   it('is the one relation behind the reflector page and range & exposure (identical values)', () => {
-    expect(reflectorFarFieldDistanceM).toBe(farFieldDistanceM);
+    const def = createReflectorCalculator(teamConventions);
+    const dish = computeReflector(validateAll(def, defaultTexts(def)).inputs!);
+    expect(dish.values.farFieldDistanceM).toBe(farFieldDistanceM(dish.values.diameterM as number, dish.values.wavelengthM as number));
     expect(farFieldBoundaryM(1.8, 12e9)).toBe(farFieldDistanceM(1.8, freeSpaceWavelengthM(12e9)));
   });
   it('rejects a non-positive size or wavelength', () => {

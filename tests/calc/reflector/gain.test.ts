@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { apertureGainDbi, diameterForGainM, solveDiameterForGainM } from '../../../calc/reflector/gain';
+import { apertureGainDbi, diameterForGainM } from '../../../calc/aperture/index';
+import { solveDiameterForGainM } from '../../../calc/reflector/gain';
 import { CalcInputError } from '../../../calc/errors';
 
 describe('apertureGainDbi(η, D, λ) = 10·log10(η (πD/λ)²)', () => {

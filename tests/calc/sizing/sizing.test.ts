@@ -3,7 +3,7 @@ import fc from 'fast-check';
 import { createArchitectureSizingCalculator, computeArchitectureSizing } from '../../../calc/calculators/architectureSizing';
 import { computeReflector } from '../../../calc/calculators/reflector';
 import { computeScanLoss } from '../../../calc/calculators/scanLoss';
-import { apertureGainDbi } from '../../../calc/reflector/gain';
+import { apertureGainDbi } from '../../../calc/aperture/index';
 import { freeSpaceWavelengthM } from '../../../calc/wavelength';
 import { maxGratingFreeSpacingWavelengths } from '../../../calc/gratingLobeLimit';
 import { defaultTexts, validateAll } from '../../../components/frame/calculatorModel';
