@@ -1,7 +1,8 @@
 /**
- * The shape of the team's conventions file (values live in site/conventions.ts).
- * calc/ functions take these values as ordinary arguments; only page-level calculator
- * definitions read them as defaults.
+ * The team's conventions: their shape and their values, the defaults every calculator starts
+ * from. calc/ functions take these values as ordinary arguments; only calculator definitions
+ * read them as defaults. Change a value here and rebuild: every calculator, island and the
+ * Conventions page (site/conventions.ts re-exports these values with one sentence on each) follow.
  */
 export interface TeamConventions {
   /** Preferred display units. */
@@ -31,3 +32,14 @@ export interface TeamConventions {
   /** Default lattice for planar arrays. */
   lattice: 'rectangular' | 'triangular';
 }
+
+/** The team's defaults (the Conventions page explains each one). */
+export const teamConventions: TeamConventions = {
+  units: { frequency: 'GHz', length: 'cm' },
+  spacingMarginFraction: 0.05,
+  elementPowerExponent: 1.3,
+  efficiencies: { reflectorAperture: 0.6, arrayRadiation: 0.8 },
+  maxScanDeg: 45,
+  designFrequencyHz: 10e9,
+  lattice: 'triangular',
+};

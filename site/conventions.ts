@@ -1,18 +1,11 @@
 /**
- * The team's conventions: defaults every calculator starts from, and the Conventions page's
- * source. Change a value here and rebuild: every calculator and the Conventions page follow.
+ * The team's conventions for pages: the values (kept beside their type in calc/teamConventions.ts,
+ * so islands read them without importing site/) and one sentence on each for the Conventions page.
+ * Change a value in calc/teamConventions.ts and rebuild: every calculator and the Conventions page follow.
  */
 import type { TeamConventions } from '../calc/teamConventions';
 
-export const teamConventions: TeamConventions = {
-  units: { frequency: 'GHz', length: 'cm' },
-  spacingMarginFraction: 0.05,
-  elementPowerExponent: 1.3,
-  efficiencies: { reflectorAperture: 0.6, arrayRadiation: 0.8 },
-  maxScanDeg: 45,
-  designFrequencyHz: 10e9,
-  lattice: 'triangular',
-};
+export { teamConventions } from '../calc/teamConventions';
 
 /** One sentence per convention, for the Conventions page (keys follow TeamConventions). */
 export const conventionNotes: { key: string; value: (c: TeamConventions) => string; note: string }[] = [

@@ -1,12 +1,12 @@
 /**
  * Data for the Verification record page: every reference case the test suite runs
- * (tests/reference/index.ts), with the value the code computes at build time and pass/fail, and,
+ * (verification/reference/index.ts), with the value the code computes at build time and pass/fail, and,
  * apart from the pass count, the values transcribed into calc/ from a source
- * (tests/reference/transcribed.ts), which the code cannot check against itself.
+ * (verification/reference/transcribed.ts), which the code cannot check against itself.
  * Pure, so tests/site/verificationRecord.test.ts checks it lists exactly the cases the tests run.
  */
-import { caseUnit, runReferenceCase, type ReferenceGroup } from '../../tests/reference/referenceCase';
-import { formatTranscribed, type TranscribedGroup } from '../../tests/reference/transcribed';
+import { caseUnit, runReferenceCase, type ReferenceGroup } from '../../verification/reference/referenceCase';
+import { formatTranscribed, type TranscribedGroup } from '../../verification/reference/transcribed';
 
 export interface VerificationRow {
   id: string;

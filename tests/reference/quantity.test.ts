@@ -1,9 +1,9 @@
 import { readdirSync, readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
-import { referenceGroups } from './index';
-import { caseUnit } from './referenceCase';
-import { hasUnitSuffix, quantityFromName, quantityOfOutput, QUANTITY_UNITS } from './quantity';
-import { transcribedGroups } from './transcribed';
+import { referenceGroups } from '../../verification/reference/index';
+import { caseUnit } from '../../verification/reference/referenceCase';
+import { hasUnitSuffix, quantityFromName, quantityOfOutput, QUANTITY_UNITS } from '../../verification/reference/quantity';
+import { transcribedGroups } from '../../verification/reference/transcribed';
 import { calculatorFactories } from '../../calc/calculators/index';
 import { teamConventions } from '../../site/conventions';
 
@@ -82,9 +82,9 @@ describe('transcribed values are not reference cases', () => {
   });
 
   it('no *.cases.ts file reads a transcribed constant', () => {
-    const files = readdirSync('tests/reference').filter((f) => f.endsWith('.cases.ts'));
+    const files = readdirSync('verification/reference').filter((f) => f.endsWith('.cases.ts'));
     for (const t of transcribedGroups) {
-      for (const f of files) expect(readFileSync(`tests/reference/${f}`, 'utf8').includes(t.constant.name), `${f} reads ${t.constant.name}`).toBe(false);
+      for (const f of files) expect(readFileSync(`verification/reference/${f}`, 'utf8').includes(t.constant.name), `${f} reads ${t.constant.name}`).toBe(false);
     }
   });
 

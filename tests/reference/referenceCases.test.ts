@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { referenceGroups } from './index';
-import { runReferenceCase } from './referenceCase';
+import { referenceGroups } from '../../verification/reference/index';
+import { runReferenceCase } from '../../verification/reference/referenceCase';
 
 // Runs every reference case; the same list feeds the Verification record page.
 describe('reference cases', () => {

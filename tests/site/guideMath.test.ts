@@ -49,7 +49,7 @@ describe('maths in the guide (site/pages/guide/*.mdx) renders with KaTeX in stri
   });
 
   it('no source file holds a control character (a lost backslash, e.g. "\\a" in a JS string, becomes BEL)', () => {
-    const files = ['site', 'components', 'calc', 'tests', 'scripts'].flatMap(sourceFiles);
+    const files = ['site', 'components', 'calc', 'tests', 'verification', 'scripts'].flatMap(sourceFiles);
     const bad = files.filter((f) => CONTROL_CHARACTER.test(readFileSync(f, 'utf8')));
     expect(bad).toEqual([]);
   });

@@ -14,7 +14,7 @@ function files(dir: string): string[] {
     return /\.(ts|svelte|astro|mdx|py|mjs)$/.test(e.name) && p !== SELF ? [p] : [];
   });
 }
-const sources = ['calc', 'components', 'site', 'tests', 'scripts', 'bench'].flatMap(files).map((f) => ({ f, text: readFileSync(f, 'utf8') }));
+const sources = ['calc', 'components', 'site', 'tests', 'verification', 'scripts', 'bench'].flatMap(files).map((f) => ({ f, text: readFileSync(f, 'utf8') }));
 
 /** Citation numbers that need a "(… number from memory)" mark: §, ch., Table, eq., Fig. */
 const NUMBERED = /(§\s?\d[\d.]*(?:[–-]\d[\d.]*)?(?:\s(?:and|\/)\s§\d[\d.]*)?|\bch\.\s\d+(?:[–-]\d+|\sand\s\d+)?|\b[Cc]hapter\s\d+|\bTable\s\d[\d.]*|\b[Ee]qs?\.\s?\(\d+[a-z]?\)|\b[Ee]qs?\.\s\d[\d.-]*\d|\bFig\.\s\d[\d.]*)/g;

@@ -1,8 +1,8 @@
 import { describe, expect, it } from 'vitest';
-import { referenceGroups } from '../reference/index';
+import { referenceGroups } from '../../verification/reference/index';
 import { buildVerificationRecord, formatComputedNumber, formatRecordNumber } from '../../site/lib/verificationRecord';
-import { caseUnit, type ReferenceGroup } from '../reference/referenceCase';
-import { transcribedGroups } from '../reference/transcribed';
+import { caseUnit, type ReferenceGroup } from '../../verification/reference/referenceCase';
+import { transcribedGroups } from '../../verification/reference/transcribed';
 
 const record = buildVerificationRecord(referenceGroups, transcribedGroups);
 

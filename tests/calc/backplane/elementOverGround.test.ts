@@ -3,7 +3,7 @@ import { dipoleOverPlaneDirectivity, type DipoleKind } from '../../../calc/backp
 import { buildArrayModel } from '../../../calc/array/buildArray';
 import { directivity } from '../../../calc/array/directivity';
 import { CalcInputError } from '../../../calc/errors';
-import fixture from '../../fixtures/backplane.json';
+import fixture from '../../../verification/fixtures/backplane.json';
 
 describe('dipoleOverPlaneDirectivity against SciPy dblquad (scripts/fixtures/backplane.py)', () => {
   for (const c of fixture.cases) {

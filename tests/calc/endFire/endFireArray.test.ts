@@ -13,7 +13,7 @@ import {
 } from '../../../calc/endFire/index';
 import { directivity } from '../../../calc/array/directivity';
 import { CalcInputError } from '../../../calc/errors';
-import fixture from '../../fixtures/end-fire.json';
+import fixture from '../../../verification/fixtures/end-fire.json';
 
 describe('endFireElementCount(L, d): N = ⌊L/d⌋ + 1 (our rule)', () => {
   it('counts whole elements that fit the length', () => {

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
-import fixture from '../../fixtures/link-budget.json';
+import fixture from '../../../verification/fixtures/link-budget.json';
 import { computeLinkBudget, createLinkBudgetCalculator } from '../../../calc/calculators/linkBudget';
 import { defaultTexts, safeCompute, validateAll } from '../../../components/frame/calculatorModel';
 import { teamConventions } from '../../../site/conventions';

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
-import fixture from '../../fixtures/link-budget.json';
+import fixture from '../../../verification/fixtures/link-budget.json';
 import { BOLTZMANN_DBW_PER_K_HZ, BOLTZMANN_J_PER_K, noiseDensityDbmPerHz, thermalNoisePowerDbm } from '../../../calc/link/thermalNoise';
 import { antennaNoiseTemperatureK, lossyLineNoiseTemperatureK, noiseFigureToTemperatureK, noiseTemperatureToFigureDb } from '../../../calc/link/noiseTemperature';
 import { cascadeNoiseTemperatureK, systemNoiseTemperatureK } from '../../../calc/link/noiseCascade';

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
-import fixture from '../../fixtures/link-budget.json';
+import fixture from '../../../verification/fixtures/link-budget.json';
 import { axialRatioFromDb, polarizationEfficiency, polarizationMismatchLossDb } from '../../../calc/link/polarizationMismatch';
 
 // The closed form is the one for two elliptically polarized antennas in W. L. Stutzman,

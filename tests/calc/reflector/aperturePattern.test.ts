@@ -3,8 +3,8 @@ import { apertureField, apertureFieldSlope, beamFigures, sidelobePeaks, tabulate
 import { rimHalfAngleRad } from '../../../calc/reflector/geometry';
 import { feedPowerPattern } from '../../../calc/reflector/feedPattern';
 import { jinc } from '../../../calc/numeric/besselJ';
-import fixture from '../../fixtures/reflector-efficiency.json';
-import sidelobeFixture from '../../fixtures/reflector-sidelobes.json';
+import fixture from '../../../verification/fixtures/reflector-efficiency.json';
+import sidelobeFixture from '../../../verification/fixtures/reflector-sidelobes.json';
 
 function feedAperture(fd: number, q: number) {
   const half = Math.tan(rimHalfAngleRad(fd) / 2);

@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { blockageEfficiency, centralBlockedFraction } from '../../../calc/reflector/blockage';
 import { rimHalfAngleRad, feedAngleAtApertureRadiusRad } from '../../../calc/reflector/geometry';
 import { CalcInputError } from '../../../calc/errors';
-import fixture from '../../fixtures/reflector-efficiency.json';
+import fixture from '../../../verification/fixtures/reflector-efficiency.json';
 
 const blockedAngle = (fd: number, fraction: number) => feedAngleAtApertureRadiusRad(fd, fraction / 2); // D = 1
 

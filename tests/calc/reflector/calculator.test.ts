@@ -4,8 +4,8 @@ import { computeReflector, createReflectorCalculator } from '../../../calc/calcu
 import type { CalcInputs, NumberParamSpec } from '../../../calc/calculator';
 import { CalcInputError } from '../../../calc/errors';
 import { teamConventions } from '../../../site/conventions';
-import sidelobeFixture from '../../fixtures/reflector-sidelobes.json';
-import offsetFixture from '../../fixtures/reflector-feed-offset.json';
+import sidelobeFixture from '../../../verification/fixtures/reflector-sidelobes.json';
+import offsetFixture from '../../../verification/fixtures/reflector-feed-offset.json';
 
 const def = createReflectorCalculator(teamConventions);
 

@@ -4,7 +4,7 @@ import { rimHalfAngleRad } from '../../../calc/reflector/geometry';
 import { edgeTaperDb } from '../../../calc/reflector/feedPattern';
 import { goldenMinimize } from '../../../calc/numeric/goldenMinimize';
 import { CalcInputError } from '../../../calc/errors';
-import fixture from '../../fixtures/reflector-efficiency.json';
+import fixture from '../../../verification/fixtures/reflector-efficiency.json';
 
 describe('spillover and taper efficiency against SciPy quad (scripts/fixtures/reflector_efficiency.py)', () => {
   it('match to 2e-6 absolute for f/D 0.3…2 and q 0…40', () => {

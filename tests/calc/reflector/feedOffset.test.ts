@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { displacedFeedBeam, feedOffsetAngleRad, feedOffsetForTiltM, loBeamDeviationFactor, peakInWidenedWindow } from '../../../calc/reflector/feedOffset';
-import offsetFixture from '../../fixtures/reflector-feed-offset.json';
+import offsetFixture from '../../../verification/fixtures/reflector-feed-offset.json';
 import { CalcInputError } from '../../../calc/errors';
 
 describe("Lo's beam deviation factor (Y. T. Lo, IRE Trans. AP-8, 1960)", () => {

@@ -5,7 +5,7 @@
  * case's source, expected value, tolerance and the value the code computes at build time.
  *
  * A value copied into calc/ from a source (a table entry) is not checked by comparing the code with
- * itself: it is a `TranscribedValue` (tests/reference/transcribed.ts), listed apart and never counted
+ * itself: it is a `TranscribedValue` (verification/reference/transcribed.ts), listed apart and never counted
  * as a passed check.
  */
 import { QUANTITY_UNITS, type Quantity } from './quantity';

@@ -7,7 +7,7 @@ import { illuminationEfficiencies, optimumIllumination } from '../../calc/reflec
 import { rimHalfAngleRad } from '../../calc/reflector/geometry';
 import { computeReflector, createReflectorCalculator } from '../../calc/calculators/reflector';
 import type { CalcInputs } from '../../calc/calculator';
-import { teamConventions } from '../../site/conventions';
+import { teamConventions } from '../../calc/teamConventions';
 import fixture from '../fixtures/reflector-efficiency.json';
 import sidelobeFixture from '../fixtures/reflector-sidelobes.json';
 import offsetFixture from '../fixtures/reflector-feed-offset.json';
@@ -16,13 +16,13 @@ import { feedPowerPattern } from '../../calc/reflector/feedPattern';
 
 const BALANIS_15_4 = 'Balanis, Antenna Theory, 4th ed., Wiley 2016, §15.4.1 (section number from memory; figure of aperture efficiency against ψ0 for cos^n feeds; read from the figure)';
 const BALANIS_12_7 = 'Balanis, Antenna Theory, 4th ed., Wiley 2016, §12.7 (section number from memory), circular-aperture figures';
-const SCIPY = 'SciPy quad, scripts/fixtures/reflector_efficiency.py (tests/fixtures/reflector-efficiency.json)';
+const SCIPY = 'SciPy quad, scripts/fixtures/reflector_efficiency.py (verification/fixtures/reflector-efficiency.json)';
 
 const uniform = () => beamFigures(tabulateAperture(() => 1))!;
 /** HPBW (rad) × D/λ of a circular aperture from its half-power point u = (πD/λ) sin(θ/2): 2u/π for a narrow beam. */
 const beamwidthTimesDiameterRad = (halfPowerU: number) => (2 * halfPowerU) / Math.PI;
-const SIDELOBE_SCIPY = 'NumPy/SciPy, scripts/fixtures/reflector_sidelobes.py (tests/fixtures/reflector-sidelobes.json)';
-const OFFSET_NUMPY = 'NumPy/SciPy direct aperture sum, scripts/fixtures/reflector_feed_offset.py (tests/fixtures/reflector-feed-offset.json)';
+const SIDELOBE_SCIPY = 'NumPy/SciPy, scripts/fixtures/reflector_sidelobes.py (verification/fixtures/reflector-sidelobes.json)';
+const OFFSET_NUMPY = 'NumPy/SciPy direct aperture sum, scripts/fixtures/reflector_feed_offset.py (verification/fixtures/reflector-feed-offset.json)';
 const blocked20 = sidelobeFixture.cases.find((c) => c.focalRatio === 0.4 && c.innerFraction === 0.2)!;
 const laterLobe = sidelobeFixture.cases.find((c) => c.powerExponent === 12 && c.innerFraction === 0.1)!;
 const farOffset = offsetFixture.cases.find((c) => c.focalRatio === 0.3 && c.offsetWavelengths === 4)!;

@@ -18,7 +18,7 @@ const db = (x: number) => 10 * Math.log10(x);
 const DEG = 180 / Math.PI;
 /** Beamwidth (rad) times the aperture size in wavelengths: the constant of HPBW ≈ k λ/L. */
 const beamwidthTimesSizeRad = (hpbwDeg: number, sizeWavelengths: number) => (hpbwDeg / DEG) * sizeWavelengths;
-const SCIPY = 'SciPy 1.17.1 via scripts/fixtures/array_weights.py (tests/fixtures/array-weights.json)';
+const SCIPY = 'SciPy 1.17.1 via scripts/fixtures/array_weights.py (verification/fixtures/array-weights.json)';
 
 const taylorCase = fixture.taylor.find((c) => c.count === 16 && c.nbar === 4 && c.sidelobeDb === 30 && c.norm)!;
 const chebyshevCase = fixture.chebyshev.find((c) => c.count === 16 && c.sidelobeDb === 30)!;

@@ -4,7 +4,7 @@ import { gratingLobeOnsetScanDeg, maxGratingFreeSpacingWavelengths } from '../..
 import { elementCountEstimate } from '../../calc/elementCount';
 import { formulaCatalog } from '../../calc/formulaCatalog';
 import { calculatorFactories } from '../../calc/calculators/index';
-import { teamConventions } from '../../site/conventions';
+import { teamConventions } from '../../calc/teamConventions';
 import { quantityOfOutput, type Quantity } from './quantity';
 
 export const wavelengthCases: ReferenceGroup = {
