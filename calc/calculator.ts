@@ -9,6 +9,7 @@
  */
 import type { CalcWarning } from './warnings';
 import type { FormulaDef } from './formula';
+import type { NavPlacement, SafetyNote } from './calculatorListing';
 
 /** Physical kinds that the frame knows how to parse and format. */
 export type QuantityKind =
@@ -114,6 +115,14 @@ export interface CalculatorDef<Data = unknown> {
   title: string;
   /** One sentence: what question the calculator answers. */
   purpose: string;
+  /** One line for the navigation and the home page: what the page covers. */
+  summary: string;
+  /** Place in the site navigation. */
+  nav: NavPlacement;
+  /** Safety note shown above the calculator on its page and on its embed route. */
+  safety: SafetyNote;
+  /** Whether the calculator has an embed route and an "Embed this" snippet (its island must be in components/calculators/islands.ts). */
+  embed: boolean;
   /** Current URL schema version (the `v` key). */
   schemaVersion: number;
   /**
@@ -130,7 +139,8 @@ export interface CalculatorDef<Data = unknown> {
   references: string[];
   /**
    * Worked examples from the team's own scenarios (demo data): a title and a query string.
-   * Tests run each one (formula links, finiteness); guide pages may preset a calculator to one.
+   * Tests run each one (formula links, finiteness); every calculator page lists them (CalculatorPage.astro)
+   * and guide pages may preset a calculator to one.
    */
   examples: { title: string; query: string }[];
   /** Path of the calc/ module, shown on the page. */

@@ -134,6 +134,10 @@ export function createArchitectureSizingCalculator(conventions: TeamConventions)
   return {
     id: 'architecture-sizing',
     title: 'Architecture sizing',
+    summary: 'Every architecture — reflector, end-fire, linear, planar, circular and Y arrays — sized to one gain or beamwidth requirement, side by side, with what rules each out.',
+    nav: { order: 1 },
+    safety: { lead: '', cautions: ['rfExposure', 'workAtHeight'] },
+    embed: true,
     purpose: 'Which kind of antenna meets this requirement, and how big must each kind be? Every architecture sized to the same gain or beamwidth over the same coverage region, side by side, with what rules each one out.',
     schemaVersion: 1,
     migrations: {},

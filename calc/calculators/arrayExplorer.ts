@@ -216,6 +216,10 @@ export function createArrayExplorerCalculator(conventions: TeamConventions, opti
   return {
     id: 'array-explorer',
     title: 'Array pattern explorer',
+    summary: 'Pattern cut, u–v map, directivity, beamwidths, sidelobes and grating lobes of a steered array, with the element excitation table.',
+    nav: { order: 6 },
+    safety: { lead: '', cautions: ['rfExposure', 'workAtHeight'] },
+    embed: true,
     purpose:
       'What does this array radiate when steered: its pattern cut and u–v map, directivity, beamwidths, sidelobe level and grating lobes, and the amplitude and phase each element needs?',
     schemaVersion: 2,

@@ -197,6 +197,10 @@ export function createBackplaneSpacingCalculator(conventions: TeamConventions): 
   return {
     id: 'backplane-spacing',
     title: 'Backplane spacing',
+    summary: 'Spacing of a conducting plane behind dipoles: the λ/4 rule with a spacer, the image factor over a band and scan range, the flattest spacing, and directivity over the plane.',
+    nav: { order: 5 },
+    safety: { lead: '', cautions: ['rfExposure', 'workAtHeight'] },
+    embed: true,
     purpose: 'How far behind dipole-like radiators should a conducting backplane sit, and what does that spacing cost in broadside gain over a band and a scan range?',
     schemaVersion: 1,
     migrations: {},

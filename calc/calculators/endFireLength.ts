@@ -291,6 +291,10 @@ export function createEndFireLengthCalculator(conventions: TeamConventions): Cal
   return {
     id: 'end-fire-length',
     title: 'End-fire length vs gain',
+    summary: 'Length of an ordinary or Hansen–Woodyard end-fire array or a Yagi–Uda for a gain, against a broadside aperture of the same length; stacking Yagis.',
+    nav: { order: 4 },
+    safety: { lead: 'Yagi–Uda antennas and stacked bays go on masts and towers.', cautions: ['workAtHeight', 'rfExposure'] },
+    embed: true,
     purpose: 'How long must an end-fire antenna (ordinary or Hansen–Woodyard array, or Yagi–Uda) be for a given gain, and where does a broadside aperture of the same length become the better answer?',
     schemaVersion: 1,
     migrations: {},

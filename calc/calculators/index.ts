@@ -27,3 +27,13 @@ export const calculatorFactories: Record<string, (conventions: TeamConventions) 
   'link-budget': createLinkBudgetCalculator as (c: TeamConventions) => CalculatorDef<unknown>,
   'unit-converter': createUnitConverterCalculator as (c: TeamConventions) => CalculatorDef<unknown>,
 };
+
+/**
+ * Every calculator's definition, in navigation order (`nav.order`): the navigation, the home page,
+ * the safety notes and the embed routes read their entries from this one list.
+ */
+export function calculatorsInNavOrder(conventions: TeamConventions): CalculatorDef<unknown>[] {
+  return Object.values(calculatorFactories)
+    .map((make) => make(conventions))
+    .sort((a, b) => a.nav.order - b.nav.order);
+}

@@ -300,6 +300,10 @@ export function createLinkBudgetCalculator(conventions: TeamConventions): Calcul
   return {
     id: 'link-budget',
     title: 'Link budget, G/T & margin',
+    summary: 'The whole link as a budget table: EIRP (also of an active array), path, polarization and pointing losses, system noise temperature, G/T, C/N₀, Eb/N₀, margin and the largest range at a chosen margin.',
+    nav: { order: 9 },
+    safety: { lead: 'The transmit side of a link budget is a transmitter: the Link range & RF exposure page (linked under the budget table, with this EIRP) estimates how close to the antenna the power density exceeds a limit.', cautions: ['rfExposure'] },
+    embed: true,
     purpose:
       'Does the link close? EIRP, path and polarization losses, the receiving system’s noise temperature and G/T, C/N₀, C/N and Eb/N₀, the margin, and the largest range that keeps a chosen margin — as a budget table.',
     schemaVersion: 1,

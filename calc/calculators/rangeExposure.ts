@@ -200,6 +200,10 @@ export function createRangeExposureCalculator(conventions: TeamConventions): Cal
   return {
     id: 'range-exposure',
     title: 'Link range & RF exposure',
+    summary: 'Friis range or the gain a range needs, free-space loss (ITU-R P.525), EIRP, power density and the distance to an exposure limit.',
+    nav: { order: 8 },
+    safety: { lead: 'These are simplified estimates.', cautions: ['rfExposure', 'sunOnFeed'] },
+    embed: true,
     purpose:
       'How far does a free-space link reach with these antennas — or how much gain does a given range need — and how close to the transmitting antenna does the power density exceed an exposure limit?',
     schemaVersion: 1,

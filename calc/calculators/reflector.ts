@@ -380,6 +380,10 @@ export function createReflectorCalculator(conventions: TeamConventions): Calcula
   return {
     id: 'front-fed-reflector',
     title: 'Front-fed parabolic reflector',
+    summary: 'Gain or diameter from an efficiency budget (spillover, taper, surface, blockage), the far-field pattern, the best edge taper, and beam steering by feed offset.',
+    nav: { order: 3 },
+    safety: { lead: 'A high-gain transmitting dish concentrates RF power along its beam, most strongly in the near field in front of the aperture. Never stand in front of an energised dish.', cautions: ['rfExposure', 'sunOnFeed', 'workAtHeight'] },
+    embed: true,
     purpose:
       'What gain, beamwidth and sidelobes does a prime-focus dish give with a given feed taper, surface and blockage — or how large must it be for a gain — and how far can a feed offset steer its beam?',
     schemaVersion: 1,

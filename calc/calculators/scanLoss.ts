@@ -132,6 +132,10 @@ export function createScanLossCalculator(conventions: TeamConventions): Calculat
   return {
     id: 'scan-loss',
     title: 'Scan-loss estimate',
+    summary: 'Gain lost at the scan edge — projected aperture, element factor, mismatch — beam broadening, grating-lobe onset, and the aperture growth a gain target needs.',
+    nav: { order: 7 },
+    safety: { lead: 'A scanned array still concentrates its power along the steered beam.', cautions: ['rfExposure'] },
+    embed: true,
     purpose: 'How much gain does a planar phased array lose at the edge of its scan range, where does that loss come from, and how much bigger must the aperture be to hold a gain target there?',
     schemaVersion: 1,
     migrations: {},

@@ -66,6 +66,10 @@ export function createUnitConverterCalculator(conventions: TeamConventions): Cal
   return {
     id: 'unit-converter',
     title: 'Unit & level converter',
+    summary: 'dB and ratios, dBm and watts, power density and field strength, VSWR and return loss, noise figure and temperature, dBi and dBd, frequency and wavelength, Eb/N₀ and C/N₀.',
+    nav: { order: 10 },
+    safety: { lead: 'Power densities and field strengths converted here bear on exposure limits.', cautions: ['rfExposure'] },
+    embed: true,
     purpose: 'The conversions a design meeting needs at once: decibels and ratios, dBm and watts, power density and field strength, VSWR and return loss, noise figure and temperature, dBi and dBd, frequency and wavelength, Eb/N₀ and C/N₀.',
     schemaVersion: 1,
     migrations: {},

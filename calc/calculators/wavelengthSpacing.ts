@@ -179,6 +179,10 @@ export function createWavelengthSpacingCalculator(conventions: TeamConventions):
   return {
     id: 'wavelength-spacing',
     title: 'Wavelength & element spacing',
+    summary: 'Wavelengths over a band, the grating-lobe-free spacing for a lattice and scan range, and the element count of an aperture.',
+    nav: { order: 2 },
+    safety: { lead: 'Arrays spaced here usually transmit:', cautions: ['rfExposure'] },
+    embed: true,
     purpose:
       'How far apart can the elements of a phased array sit before a grating lobe appears, over the band and the scan range, and how many elements does the aperture then need?',
     schemaVersion: 1,

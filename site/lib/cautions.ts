@@ -1,12 +1,17 @@
 /**
- * Safety notes by calculator id: every calculator has one, because every one of them sizes or
- * describes antennas that transmit or are mounted on masts and roofs. CalculatorPage.astro shows
- * the note above the calculator and the embed route shows the same note, so an embedded copy
- * never loses it. tests/site/cautions.test.ts checks that every registered calculator has one.
+ * Safety notes: every calculator has one, because every one of them sizes or describes antennas
+ * that transmit or are mounted on masts and roofs. Each definition names its note (`safety`: its
+ * own opening sentences and which shared cautions below apply, in order); this file holds the
+ * shared texts and joins them. CalculatorPage.astro shows the note above the calculator and the
+ * embed route shows the same note, so an embedded copy never loses it.
+ * tests/site/cautions.test.ts checks every registered calculator's note.
  */
+import type { SafetyNote, SharedCaution } from '../../calc/calculatorListing';
+import { calculatorsInNavOrder } from '../../calc/calculators/index';
+import { teamConventions } from '../conventions';
 
 /** What every note ends with: the page estimates, people and rules decide. */
-const DEFER =
+export const DEFER =
   'These figures do not replace local regulations, a qualified RF-exposure assessment, or licensed practice for work at height.';
 
 /** The RF-exposure caution for anything that transmits. */
@@ -19,15 +24,19 @@ export const WORK_AT_HEIGHT_CAUTION =
 
 const SUN_CAUTION = 'A dish pointed near the sun focuses sunlight on its feed and can burn it or anyone in front of it.';
 
-export const calculatorCautions: Record<string, string> = {
-  'architecture-sizing': `${RF_EXPOSURE_CAUTION} ${WORK_AT_HEIGHT_CAUTION} ${DEFER}`,
-  'wavelength-spacing': `Arrays spaced here usually transmit: ${RF_EXPOSURE_CAUTION} ${DEFER}`,
-  'scan-loss': `A scanned array still concentrates its power along the steered beam. ${RF_EXPOSURE_CAUTION} ${DEFER}`,
-  'array-explorer': `${RF_EXPOSURE_CAUTION} ${WORK_AT_HEIGHT_CAUTION} ${DEFER}`,
-  'backplane-spacing': `${RF_EXPOSURE_CAUTION} ${WORK_AT_HEIGHT_CAUTION} ${DEFER}`,
-  'end-fire-length': `Yagi–Uda antennas and stacked bays go on masts and towers. ${WORK_AT_HEIGHT_CAUTION} ${RF_EXPOSURE_CAUTION} ${DEFER}`,
-  'front-fed-reflector': `A high-gain transmitting dish concentrates RF power along its beam, most strongly in the near field in front of the aperture. Never stand in front of an energised dish. ${RF_EXPOSURE_CAUTION} ${SUN_CAUTION} ${WORK_AT_HEIGHT_CAUTION} ${DEFER}`,
-  'range-exposure': `These are simplified estimates. ${RF_EXPOSURE_CAUTION} ${SUN_CAUTION} ${DEFER}`,
-  'link-budget': `The transmit side of a link budget is a transmitter: the Link range & RF exposure page (linked under the budget table, with this EIRP) estimates how close to the antenna the power density exceeds a limit. ${RF_EXPOSURE_CAUTION} ${DEFER}`,
-  'unit-converter': `Power densities and field strengths converted here bear on exposure limits. ${RF_EXPOSURE_CAUTION} ${DEFER}`,
+/** The text of each shared caution a definition may name. */
+export const SHARED_CAUTIONS: Record<SharedCaution, string> = {
+  rfExposure: RF_EXPOSURE_CAUTION,
+  workAtHeight: WORK_AT_HEIGHT_CAUTION,
+  sunOnFeed: SUN_CAUTION,
 };
+
+/** A calculator's safety note as shown: its lead, the shared cautions in order, then the deferral. */
+export function safetyNoteText(note: SafetyNote): string {
+  return [note.lead, ...note.cautions.map((c) => SHARED_CAUTIONS[c]), DEFER].filter((s) => s !== '').join(' ');
+}
+
+/** Safety note by calculator id, built from the registry (for the embed route and the tests). */
+export const calculatorCautions: Record<string, string> = Object.fromEntries(
+  calculatorsInNavOrder(teamConventions).map((def) => [def.id, safetyNoteText(def.safety)]),
+);

@@ -1,7 +1,7 @@
 import { readdirSync, readFileSync } from 'node:fs';
 import { resolve } from 'node:path';
 import { describe, expect, it } from 'vitest';
-import { calculatorIslands } from '../../site/lib/islands';
+import { islandsById } from '../../components/calculators/islands';
 import { calculatorFactories } from '../../calc/calculators';
 import { teamConventions } from '../../site/conventions';
 import { decodeState } from '../../components/frame/urlState';
@@ -24,8 +24,8 @@ describe('guide embeds', () => {
       expect(new Set(names).size, 'at most one copy of each calculator per page').toBe(names.length);
       for (const [, name, attrs] of uses) {
         const component = (await import(/* @vite-ignore */ resolve(dir, imports.get(name)!))).default;
-        const id = Object.keys(calculatorIslands).find((k) => calculatorIslands[k] === component);
-        expect(id, `${name} is listed in site/lib/islands.ts`).toBeDefined();
+        const id = Object.keys(islandsById).find((k) => islandsById[k] === component);
+        expect(id, `${name} is listed in components/calculators/islands.ts`).toBeDefined();
         expect(attrs).toMatch(/linked=\{false\}/);
         expect(attrs).toMatch(/client:visible/);
         const preset = attrs.match(/preset="([^"]+)"/)?.[1];
