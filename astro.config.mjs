@@ -5,7 +5,7 @@ import mdx from '@astrojs/mdx';
 import { searchIndex } from './scripts/searchIndexIntegration.ts';
 import remarkMath from 'remark-math';
 import rehypeKatex from 'rehype-katex';
-import { KATEX_OPTIONS, rehypeFailOnKatexError } from './site/lib/mathRendering.ts';
+import { KATEX_OPTIONS, rehypeFailOnKatexError } from './components/astro/mathRendering.ts';
 
 const base = process.env.BASE || '/';
 
@@ -18,7 +18,7 @@ export default defineConfig({
   output: 'static',
   integrations: [svelte(), mdx(), searchIndex()],
   // Inline $…$ and display $$…$$ maths in Markdown/MDX, rendered to HTML by KaTeX at build time;
-  // any KaTeX error (strict mode included) fails the build (site/lib/mathRendering.ts).
+  // any KaTeX error (strict mode included) fails the build (components/astro/mathRendering.ts).
   markdown: { remarkPlugins: [remarkMath], rehypePlugins: [[rehypeKatex, KATEX_OPTIONS], rehypeFailOnKatexError] },
   build: { format: 'directory', inlineStylesheets: 'never' },
   devToolbar: { enabled: false },

@@ -5,7 +5,7 @@ import remarkMath from 'remark-math';
 import rehypeKatex from 'rehype-katex';
 import { createMarkdownProcessor } from '@astrojs/markdown-remark';
 import { describe, expect, it } from 'vitest';
-import { CONTROL_CHARACTER, KATEX_OPTIONS, rehypeFailOnKatexError, renderFormulaLatex } from '../../site/lib/mathRendering';
+import { CONTROL_CHARACTER, KATEX_OPTIONS, rehypeFailOnKatexError, renderFormulaLatex } from '../../components/astro/mathRendering';
 import { formulaCatalog } from '../../calc/formulaCatalog';
 
 const GUIDE = 'site/pages/guide';
